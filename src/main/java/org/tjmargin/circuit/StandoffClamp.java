@@ -1,0 +1,32 @@
+package org.tjmargin.circuit;
+
+import org.tjmargin.device.BreakdownDiode;
+
+/**
+ * A clamp across a DC line at its working (standoff) voltage: normally blocking, dissipating only its leakage,
+ * which doubles every few kelvin and can run away thermally. If the line rises into breakdown the clamp conducts
+ * through the line's source resistance (0 Ω: a stiff line, and then the dissipation is limited only by the
+ * breakdown line's impedance).
+ *
+ * @param lineV     line voltage across the clamp (V), ≥ 0
+ * @param sourceOhm source resistance of the line (Ω), ≥ 0
+ */
+public record StandoffClamp(double lineV, double sourceOhm) implements Circuit {
+
+    public StandoffClamp {
+        if (!(lineV >= 0) || !Double.isFinite(lineV)) {
+            throw new IllegalArgumentException("line voltage must be ≥ 0 and finite, got " + lineV + " V");
+        }
+        if (!(sourceOhm >= 0) || !Double.isFinite(sourceOhm)) {
+            throw new IllegalArgumentException("source resistance must be ≥ 0 and finite, got " + sourceOhm + " Ω");
+        }
+    }
+
+    @Override
+    public CircuitPoint at(BreakdownDiode diode, double tjK) {
+        double[] s = TheveninDrive.solve(diode, tjK, lineV, sourceOhm);
+        double i = s[1];
+        return new CircuitPoint(s[0], i, s[0] * i, i * i * sourceOhm, 0.0, Region.values()[(int) s[2]]);
+    }
+
+}

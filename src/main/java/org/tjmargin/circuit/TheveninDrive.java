@@ -1,0 +1,70 @@
+package org.tjmargin.circuit;
+
+import org.tjmargin.device.BreakdownDiode;
+
+/**
+ * The diode driven by a Thevenin source {@code (Vth, Rth)}: the one place where the breakdown characteristic meets
+ * Kirchhoff's current law, shared by the shunt regulator and the clamp.
+ *
+ * <p>On the straight line the intersection is closed-form, {@code I = (Vth − Vz0(Tj))/(Rth + Rz)} (Sedra and
+ * Smith, 5th ed., §3.5, Example 3.8 is this equation with a 0.5 kΩ resistor). On a current-dependent knee and below
+ * the knee the characteristic is nonlinear but monotone, so the intersection is unique and found by safeguarded
+ * bisection: 200 halvings at most, stopping at a relative width of 1e-15, which is the double-precision floor.
+ */
+final class TheveninDrive {
+
+    /** Bisection budget: the bracket shrinks by 2^-200, far below double resolution before the budget ends. */
+    private static final int MAX_HALVINGS = 200;
+
+    private TheveninDrive() {
+    }
+
+    /**
+     * Diode voltage and current against the source.
+     *
+     * @return {@code {voltageV, currentA, regionOrdinal}}
+     */
+    static double[] solve(BreakdownDiode d, double tjK, double vthV, double rthOhm) {
+        double vz0 = d.vz0V(tjK);
+        double lineI = (vthV - vz0) / (rthOhm + d.rzOhm());
+        if (lineI >= d.lineStartA()) {
+            return new double[] {vz0 + d.rzOhm() * lineI, lineI, Region.BREAKDOWN.ordinal()};
+        }
+        double izk = d.izkA();
+        if (vthV - d.kneeVoltageV(tjK) - rthOhm * izk >= 0) {
+            // On the knee: Vth − V(I) − Rth·I = 0 for I in [Izk, Izt], decreasing in I.
+            double lo = izk;
+            double hi = d.iztA();
+            for (int i = 0; i < MAX_HALVINGS && hi - lo > 1e-15 * hi; i++) {
+                double mid = 0.5 * (lo + hi);
+                if (vthV - d.breakdownVoltageV(mid, tjK) - rthOhm * mid >= 0) {
+                    lo = mid;
+                } else {
+                    hi = mid;
+                }
+            }
+            double i = 0.5 * (lo + hi);
+            return new double[] {d.breakdownVoltageV(i, tjK), i, Region.KNEE.ordinal()};
+        }
+        if (vthV <= 0) {
+            return new double[] {0.0, 0.0, Region.BELOW_KNEE.ordinal()};
+        }
+        if (!d.leakage().isKnown() || rthOhm == 0) {
+            double v = vthV;
+            return new double[] {v, d.subKneeCurrentA(v, tjK), Region.BELOW_KNEE.ordinal()};
+        }
+        // Below the knee: (Vth − V)/Rth − I_sub(V) = 0 for V in [0, min(Vth, Vzk)], decreasing in V.
+        double lo = 0;
+        double hi = Math.min(vthV, d.kneeVoltageV(tjK));
+        for (int i = 0; i < MAX_HALVINGS && hi - lo > 1e-15 * hi; i++) {
+            double mid = 0.5 * (lo + hi);
+            if ((vthV - mid) / rthOhm - d.subKneeCurrentA(mid, tjK) >= 0) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        double v = 0.5 * (lo + hi);
+        return new double[] {v, d.subKneeCurrentA(v, tjK), Region.BELOW_KNEE.ordinal()};
+    }
+}

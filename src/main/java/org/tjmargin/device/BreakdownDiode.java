@@ -1,0 +1,139 @@
+package org.tjmargin.device;
+
+/**
+ * Electrical model of a breakdown (Zener or avalanche) diode in reverse bias, all temperatures in kelvin.
+ *
+ * <p>Breakdown region, {@code I ≥ Izk} (design 2.1; Sedra and Smith, <i>Microelectronic Circuits</i>, 5th ed.,
+ * §3.5, eq. 3.20): {@code V = Vz0(Tj) + Rz·I} above the knee segment, with
+ * {@code Vz0(Tj) = Vz0(25 °C) + αV·(Tj − 25 °C)}; between {@code Izk} and {@code Izt} the {@link KneeModel}.
+ * Below {@code Izk} the part is out of regulation: from {@code Vr} (where the leakage {@code Ir(Tj)} is
+ * specified) up to the knee voltage the current rises exponentially, interpolated log-linearly between
+ * {@code (Vr, Ir(Tj))} and {@code (Vzk(Tj), Izk)} (a soft knee, monotone and continuous; common practice, no
+ * single source); below {@code Vr} the leakage is taken proportional to voltage. Without leakage data the part
+ * conducts nothing below its knee. The leakage voltage point moves with the knee voltage, in proportion, so the
+ * ordering {@code Vr < Vzk} holds at every temperature.
+ *
+ * @param vz0At25V   zero-current intercept of the breakdown line at {@code Tj = 25 °C} (V)
+ * @param rzOhm      dynamic impedance of the breakdown line, {@code Zzt} (Ω), > 0
+ * @param iztA       test current of {@code Vz_nom} (A), > 0
+ * @param izkA       knee current, the lowest current of the breakdown region (A), 0 < Izk < Izt
+ * @param knee       shape between {@code Izk} and {@code Izt}
+ * @param tc         temperature coefficient {@code αV}
+ * @param leakage    leakage below breakdown
+ */
+public record BreakdownDiode(double vz0At25V, double rzOhm, double iztA, double izkA, KneeModel knee,
+                             TemperatureCoefficient tc, Leakage leakage) {
+
+    public BreakdownDiode {
+        if (!(vz0At25V > 0) || !Double.isFinite(vz0At25V)) {
+            throw new IllegalArgumentException("breakdown intercept Vz0(25 °C) must be > 0, got " + vz0At25V + " V");
+        }
+        if (!(rzOhm > 0) || !Double.isFinite(rzOhm)) {
+            throw new IllegalArgumentException("dynamic impedance must be > 0, got " + rzOhm + " Ω");
+        }
+        if (!(izkA > 0) || !(iztA > izkA) || !Double.isFinite(iztA)) {
+            throw new IllegalArgumentException("need 0 < Izk < Izt, got Izk " + izkA + " A, Izt " + iztA + " A");
+        }
+        if (knee == null || tc == null || leakage == null) {
+            throw new IllegalArgumentException("knee model, temperature coefficient and leakage are required");
+        }
+        double kneeAt25V = voltageOnCharacteristic(vz0At25V, rzOhm, iztA, knee, izkA);
+        if (leakage.isKnown() && !(leakage.vrV() < kneeAt25V)) {
+            throw new IllegalArgumentException("leakage test voltage " + leakage.vrV()
+                    + " V must lie below the knee voltage " + kneeAt25V + " V");
+        }
+    }
+
+    /**
+     * Builds the model from datasheet numbers (design 2.1): {@code Rz = Zzt} and
+     * {@code Vz0(25 °C) = Vz_nom − Rz·Izt − αV·(Tj_test − 25 °C)}, where {@code Tj_test} follows from how
+     * {@code Vz_nom} was measured.
+     *
+     * @param vzNomV nominal breakdown voltage at {@code Izt} (V)
+     * @param iztA   test current (A)
+     * @param zztOhm dynamic impedance at {@code Izt} (Ω)
+     * @param izkA   knee current (A)
+     * @param zzkOhm knee impedance (Ω), or {@code Double.NaN} when the datasheet gives none
+     * @param tc     temperature coefficient
+     * @param test   the measurement condition of {@code Vz_nom}
+     * @param leak   leakage below breakdown
+     */
+    public static BreakdownDiode fromDatasheet(double vzNomV, double iztA, double zztOhm, double izkA, double zzkOhm,
+                                               TemperatureCoefficient tc, VzTestCondition test, Leakage leak) {
+        double tjTestK = test.junctionTemperatureK(vzNomV, iztA);
+        double vz0 = vzNomV - zztOhm * iztA - tc.alphaVPerK() * (tjTestK - Celsius.T25_K);
+        KneeModel knee = Double.isNaN(zzkOhm) ? new KneeModel.Linear()
+                : KneeModel.CurrentDependent.through(zztOhm, iztA, zzkOhm, izkA);
+        return new BreakdownDiode(vz0, zztOhm, iztA, izkA, knee, tc, leak);
+    }
+
+    /** Zero-current intercept of the breakdown line at {@code tjK} (V). */
+    public double vz0V(double tjK) {
+        return vz0At25V + tc.alphaVPerK() * (tjK - Celsius.T25_K);
+    }
+
+    /** The current above which the straight breakdown line holds (A): {@code Izk} or {@code Izt}. */
+    public double lineStartA() {
+        return knee instanceof KneeModel.Linear ? izkA : iztA;
+    }
+
+    /**
+     * Voltage across the diode at a current in the breakdown region.
+     *
+     * @param currentA reverse current (A), ≥ {@code Izk}
+     * @param tjK      junction temperature (K)
+     * @return reverse voltage (V)
+     */
+    public double breakdownVoltageV(double currentA, double tjK) {
+        return voltageOnCharacteristic(vz0V(tjK), rzOhm, iztA, knee, currentA);
+    }
+
+    private static double voltageOnCharacteristic(double vz0V, double rzOhm, double iztA, KneeModel knee,
+                                                  double currentA) {
+        if (currentA >= iztA || knee instanceof KneeModel.Linear) {
+            return vz0V + rzOhm * currentA;
+        }
+        KneeModel.CurrentDependent k = (KneeModel.CurrentDependent) knee;
+        // V(I) = V(Izt) − ∫_I^Izt (a/x + b) dx, continuous with the line in value and slope at Izt.
+        return vz0V + rzOhm * iztA - k.aVolts() * Math.log(iztA / currentA) - k.bOhm() * (iztA - currentA);
+    }
+
+    /** Voltage at the knee current {@code Izk}, the lower end of regulation (V). */
+    public double kneeVoltageV(double tjK) {
+        return breakdownVoltageV(izkA, tjK);
+    }
+
+    /**
+     * Current below the knee (out of regulation) at a reverse voltage under the knee voltage.
+     *
+     * @param voltageV reverse voltage (V), {@code 0 ≤ V ≤ Vzk(Tj)}
+     * @param tjK      junction temperature (K)
+     * @return reverse current (A), ≤ {@code Izk}
+     */
+    public double subKneeCurrentA(double voltageV, double tjK) {
+        if (!leakage.isKnown() || voltageV <= 0) {
+            return 0.0;
+        }
+        double vzk = kneeVoltageV(tjK);
+        double vrT = leakage.vrV() * vzk / kneeVoltageV(Celsius.T25_K);
+        double irT = Math.min(leakage.currentAtTestVoltageA(tjK), izkA);
+        if (voltageV <= vrT) {
+            return irT * voltageV / vrT;
+        }
+        if (voltageV >= vzk) {
+            return izkA;
+        }
+        double f = (voltageV - vrT) / (vzk - vrT);
+        return irT * Math.pow(izkA / irT, f);
+    }
+
+    /** Copy with the breakdown line shifted by {@code deltaV} (a tolerance corner of {@code Vz}). */
+    public BreakdownDiode withVoltageShift(double deltaV) {
+        return new BreakdownDiode(vz0At25V + deltaV, rzOhm, iztA, izkA, knee, tc, leakage);
+    }
+
+    /** Copy with another nominal temperature coefficient (a tolerance corner of {@code αV}). */
+    public BreakdownDiode withAlpha(double alphaVPerK) {
+        return new BreakdownDiode(vz0At25V, rzOhm, iztA, izkA, knee, tc.withNominal(alphaVPerK), leakage);
+    }
+}

@@ -1,0 +1,110 @@
+package org.tjmargin.solve;
+
+import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.MathIllegalStateException;
+
+/**
+ * The lowest fixed point {@code x* = F(x*)} at or above a start {@code x0} with {@code F(x0) ≥ x0}: the state a
+ * heated body reaches when it warms from the start, e.g. {@code F(Tj) = T_local + Rθ·P(Tj)} (design 2.3).
+ *
+ * <p>Method. With {@code g(x) = x − F(x)}, {@code g(x0) ≤ 0}. Secant steps are taken upward from points with
+ * {@code g < 0}, the first step being the plain fixed-point step {@code x1 = F(x0)}. Two facts make the search
+ * safe for the usual shapes of {@code P(Tj)}:
+ * <ul>
+ *   <li>If {@code P} is convex in {@code Tj} (leakage growing exponentially), {@code g} is concave, and a chord
+ *   through two points left of the lowest root crosses zero at or before that root (a concave function lies below
+ *   its chords' extensions). The steps then climb monotonically onto the lowest root and never jump past a pair of
+ *   roots to a higher one.</li>
+ *   <li>If a step lands where {@code g ≥ 0}, the lowest root is bracketed and Brent's method finishes it
+ *   (R. P. Brent, <i>Algorithms for Minimization without Derivatives</i>, 1973, ch. 4; the Commons Math
+ *   {@link BrentSolver}).</li>
+ * </ul>
+ * If {@code g} stops increasing while still negative (loop gain at or above 1), the steps expand geometrically up to
+ * the cap; no sign change below the cap means no fixed point there: runaway. Every search has an evaluation budget
+ * and ends with a typed outcome.
+ *
+ * <p>Stateless and thread-safe: each call builds its own Brent solver.
+ */
+public final class LowestFixedPoint {
+
+    /** Step for the central-difference loop gain (same unit as x): small against any thermal scale, large against
+     * the 1e-10 tolerance, so the difference quotient keeps about six significant digits. */
+    private static final double GAIN_STEP = 1e-4;
+
+    private LowestFixedPoint() {
+    }
+
+    /**
+     * Finds the lowest fixed point of {@code map} in {@code [x0, cap]}.
+     *
+     * @param map      the map {@code F}
+     * @param x0       start, with {@code F(x0) ≥ x0} expected
+     * @param settings cap, tolerance, budget
+     * @return the outcome
+     */
+    public static FixedPointOutcome find(DoubleUnaryOperator map, double x0, SolverSettings settings) {
+        final double cap = settings.capK();
+        final double tol = settings.toleranceK();
+        final int budget = settings.maxEvaluations();
+        int evals = 0;
+
+        double xa = x0;
+        double ga = xa - map.applyAsDouble(xa);
+        evals++;
+        if (ga >= -tol) {
+            return root(map, xa, ga, evals, settings);
+        }
+        double xb = Math.min(xa - ga, cap);
+        double gb = xb - map.applyAsDouble(xb);
+        evals++;
+        while (evals < budget) {
+            if (Math.abs(gb) <= tol) {
+                return root(map, xb, gb, evals, settings);
+            }
+            if (gb > 0) {
+                return brent(map, xa, xb, evals, settings);
+            }
+            if (xb >= cap) {
+                return new FixedPointOutcome.Runaway(xb, evals);
+            }
+            double slope = (gb - ga) / (xb - xa);
+            double next;
+            if (slope > 0) {
+                next = xb - gb / slope;
+                // Secant steps approach from below; keep them from stalling on rounding.
+                next = Math.max(next, xb + tol);
+            } else {
+                next = Math.max(xb - gb, xb + 2.0 * (xb - xa));
+            }
+            xa = xb;
+            ga = gb;
+            xb = Math.min(next, cap);
+            gb = xb - map.applyAsDouble(xb);
+            evals++;
+        }
+        return new FixedPointOutcome.Exhausted(xb, gb, evals);
+    }
+
+    private static FixedPointOutcome brent(DoubleUnaryOperator map, double lo, double hi, int evalsSoFar,
+                                           SolverSettings settings) {
+        // Relative accuracy 1e-15 (two ulps at 300 K-scale values); absolute as the settings; function value
+        // accuracy a tenth of it so the residual, not only the bracket, meets the tolerance.
+        BrentSolver solver = new BrentSolver(1e-15, settings.toleranceK(), 0.1 * settings.toleranceK());
+        int left = settings.maxEvaluations() - evalsSoFar;
+        try {
+            double x = solver.solve(left, t -> t - map.applyAsDouble(t), lo, hi, 0.5 * (lo + hi));
+            int evals = evalsSoFar + solver.getEvaluations();
+            double g = x - map.applyAsDouble(x);
+            return root(map, x, g, evals + 1, settings);
+        } catch (MathIllegalStateException e) {
+            return new FixedPointOutcome.Exhausted(hi, hi - map.applyAsDouble(hi), settings.maxEvaluations());
+        }
+    }
+
+    private static FixedPointOutcome root(DoubleUnaryOperator map, double x, double g, int evals,
+                                          SolverSettings settings) {
+        double gain = (map.applyAsDouble(x + GAIN_STEP) - map.applyAsDouble(x - GAIN_STEP)) / (2 * GAIN_STEP);
+        return new FixedPointOutcome.Root(x, g, gain, evals + 2);
+    }
+}
