@@ -1,0 +1,52 @@
+package org.tjmargin.derating;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * A derating policy: named rules held against every operating point.
+ *
+ * @param name       the policy's name
+ * @param provenance where it comes from
+ * @param rules      its rules, ids unique
+ */
+public record Policy(String name, String provenance, List<Rule> rules) {
+
+    public Policy {
+        rules = List.copyOf(rules);
+        if (name == null || name.isBlank()) {
+            throw new IllegalArgumentException("a policy needs a name");
+        }
+        if (rules.stream().map(Rule::id).distinct().count() != rules.size()) {
+            throw new IllegalArgumentException("rule ids must be unique in policy " + name);
+        }
+    }
+
+    /**
+     * The built-in minimum every design must meet whatever its policy: the junction below the part's Tj max, and a
+     * regulating diode's current at or above its knee. Physics, not policy: above Tj max the part is outside its
+     * absolute rating, below {@code Izk} it no longer regulates (design 2.1).
+     */
+    public static Policy builtInMinimum() {
+        return new Policy("built-in minimum", "absolute ratings of the part", List.of(
+                new Rule("tj-below-max", "junction below Tj max", Measure.JUNCTION_TEMPERATURE, Bound.MAX,
+                        new Limit.BelowTjMax(0), "absolute maximum rating of the part"),
+                new Rule("iz-above-knee", "Zener current at or above Izk", Measure.KNEE_CURRENT_RATIO, Bound.MIN,
+                        new Limit.Fixed(1.0), "definition of the breakdown region (knee current)")));
+    }
+
+    /** Every rule that applies to {@code context}, checked. */
+    public List<RuleCheck> check(RuleContext context) {
+        List<RuleCheck> out = new ArrayList<>(rules.size());
+        for (Rule r : rules) {
+            r.check(context).ifPresent(out::add);
+        }
+        return out;
+    }
+
+    /** The rule with identifier {@code id}. */
+    public Optional<Rule> rule(String id) {
+        return rules.stream().filter(r -> r.id().equals(id)).findFirst();
+    }
+}

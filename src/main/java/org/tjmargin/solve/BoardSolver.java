@@ -1,0 +1,169 @@
+package org.tjmargin.solve;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.tjmargin.circuit.ShuntRegulatorSpec;
+import org.tjmargin.derating.Policy;
+import org.tjmargin.derating.RuleCheck;
+import org.tjmargin.derating.RuleContext;
+import org.tjmargin.thermal.Enclosure;
+
+/**
+ * The whole board at one ambient: every corner of every position, coupled through the enclosure air.
+ *
+ * <p>With a sealed box the air's rise depends on what the board dissipates, which depends on the air's
+ * temperature: {@code ΔT = (Σ heat_i(T_amb + ΔT) + P_other)/(h·A)} (design 2.2). Each position contributes the
+ * heat of its corner of greatest heat (diode plus series resistor), so the rise is the worst the board can make;
+ * every corner of every position is then judged in that air. This is conservative for temperatures; it is also
+ * what a designer needs for the least-current check when the coefficient is positive (hot makes {@code Vz} rise and
+ * the current fall). The balance is the lowest fixed point of the rise, found by {@link LowestFixedPoint}.
+ *
+ * <p>Stateless and thread-safe.
+ */
+public final class BoardSolver {
+
+    /** Air-balance search: cap 1000 K of rise (any real enclosure fails long before), tolerance 1e-9 K, budget 100. */
+    static final SolverSettings AIR_BALANCE = new SolverSettings(1000.0, 1e-9, 100);
+
+    private BoardSolver() {
+    }
+
+    /**
+     * Solves the board at one ambient.
+     *
+     * @param board    the prepared board
+     * @param policy   the rules to hold every corner against
+     * @param ambientK room temperature (K)
+     * @param settings junction solve settings
+     */
+    public static BoardAtAmbient solveAt(PreparedBoard board, Policy policy, double ambientK,
+                                         SolverSettings settings) {
+        Enclosure enc = board.board().enclosure();
+        double rise;
+        int evals = 0;
+        PointStatus airStatus = PointStatus.CONVERGED;
+        if (enc.couplesPositions()) {
+            FixedPointOutcome air = LowestFixedPoint.find(
+                    dT -> enc.riseK(boardHeatW(board, ambientK + dT, settings)), 0.0, AIR_BALANCE);
+            evals = air.evaluations();
+            if (air instanceof FixedPointOutcome.Root r) {
+                rise = r.x();
+            } else if (air instanceof FixedPointOutcome.Runaway rw) {
+                rise = rw.lastX();
+                airStatus = PointStatus.RUNAWAY;
+            } else {
+                rise = ((FixedPointOutcome.Exhausted) air).lastX();
+                airStatus = PointStatus.NOT_CONVERGED;
+            }
+        } else {
+            rise = enc.riseK(0.0);
+        }
+        double tLocal = ambientK + rise;
+        List<PositionAtAmbient> positions = new ArrayList<>();
+        PointStatus status = airStatus;
+        double heat = 0;
+        for (int i = 0; i < board.board().positions().size(); i++) {
+            PositionAtAmbient p = evaluate(board.board().positions().get(i), board.instances().get(i), policy,
+                    ambientK, tLocal, settings);
+            positions.add(p);
+            status = status.worse(p.status());
+            heat += maxHeatW(p, board.instances().get(i), settings);
+        }
+        return new BoardAtAmbient(ambientK, rise, heat, positions, evals, status);
+    }
+
+    /** Every corner of one position in air at {@code tLocalK}, held against the policy. */
+    static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
+                                      double ambientK, double tLocalK, SolverSettings settings) {
+        List<CornerPoint> corners = new ArrayList<>(instances.size());
+        int hottest = -1;
+        double hottestTj = Double.NEGATIVE_INFINITY;
+        boolean hottestRunaway = false;
+        int least = -1;
+        double leastI = Double.POSITIVE_INFINITY;
+        PointStatus status = PointStatus.CONVERGED;
+        Map<String, WorstCheck> worst = new LinkedHashMap<>();
+        double resistorAllowed = spec.circuit() instanceof ShuntRegulatorSpec s
+                ? s.resistor().rating().allowedPowerAt(tLocalK) : 0.0;
+        for (int k = 0; k < instances.size(); k++) {
+            PositionInstance inst = instances.get(k);
+            ThermalOutcome out = inst.solve(tLocalK, settings);
+            RuleContext ctx;
+            double allowed = 0;
+            if (out instanceof ThermalOutcome.Converged c) {
+                OperatingPoint p = c.point();
+                allowed = spec.part().ratings().powerCurve().allowedPowerAt(p.referenceK());
+                ctx = Measurements.of(spec, inst, p, allowed, resistorAllowed);
+                if (!hottestRunaway && p.tjK() > hottestTj) {
+                    hottestTj = p.tjK();
+                    hottest = k;
+                }
+                if (p.circuit().diodeCurrentA() < leastI) {
+                    leastI = p.circuit().diodeCurrentA();
+                    least = k;
+                }
+            } else if (out instanceof ThermalOutcome.Runaway r) {
+                ctx = Measurements.unresolved(spec, r.capK());
+                status = status.worse(PointStatus.RUNAWAY);
+                if (!hottestRunaway) {
+                    hottestRunaway = true;
+                    hottest = k;
+                }
+            } else {
+                ctx = Measurements.unresolved(spec, ((ThermalOutcome.NotConverged) out).lastTjK());
+                status = status.worse(PointStatus.NOT_CONVERGED);
+            }
+            List<RuleCheck> checks = policy.check(ctx);
+            for (RuleCheck rc : checks) {
+                WorstCheck w = worst.get(rc.ruleId());
+                if (w == null || rc.margin() < w.check().margin()) {
+                    worst.put(rc.ruleId(), new WorstCheck(rc, k));
+                }
+            }
+            corners.add(new CornerPoint(inst.corner(), out, allowed, resistorAllowed, checks));
+        }
+        double margin = 1.0;
+        String limiting = "none";
+        for (WorstCheck w : worst.values()) {
+            if (w.check().margin() < margin || "none".equals(limiting)) {
+                margin = w.check().margin();
+                limiting = w.check().ruleId();
+            }
+        }
+        return new PositionAtAmbient(spec.id(), ambientK, tLocalK, corners, hottest, least,
+                new ArrayList<>(worst.values()), margin, limiting, status);
+    }
+
+    /** Heat of the board with the air at {@code tLocalK}: every position at its corner of greatest heat. */
+    private static double boardHeatW(PreparedBoard board, double tLocalK, SolverSettings settings) {
+        double sum = 0;
+        for (List<PositionInstance> insts : board.instances()) {
+            double max = 0;
+            for (PositionInstance inst : insts) {
+                max = Math.max(max, heatOf(inst, inst.solve(tLocalK, settings), settings));
+            }
+            sum += max;
+        }
+        return sum;
+    }
+
+    private static double maxHeatW(PositionAtAmbient p, List<PositionInstance> insts, SolverSettings settings) {
+        double max = 0;
+        for (int k = 0; k < insts.size(); k++) {
+            max = Math.max(max, heatOf(insts.get(k), p.corners().get(k).outcome(), settings));
+        }
+        return max;
+    }
+
+    /** Heat a corner puts into the air; a runaway corner is taken at the search cap, the worst it can be. */
+    private static double heatOf(PositionInstance inst, ThermalOutcome out, SolverSettings settings) {
+        if (out instanceof ThermalOutcome.Converged c) {
+            return c.point().heatW();
+        }
+        double tj = out instanceof ThermalOutcome.NotConverged n ? n.lastTjK() : settings.capK();
+        var cp = inst.circuit().at(inst.diode(), tj);
+        return cp.diodePowerW() + cp.resistorPowerW();
+    }
+}

@@ -1,0 +1,111 @@
+package org.tjmargin.solve;
+
+import java.util.List;
+import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.analysis.solvers.AllowedSolution;
+import org.apache.commons.math3.analysis.solvers.BracketingNthOrderBrentSolver;
+import org.apache.commons.math3.exception.MathIllegalStateException;
+import org.tjmargin.derating.Policy;
+
+/**
+ * Finds the highest ambient with margin ≥ 0 for one position: the sweep brackets the transition, a bracketing
+ * solver refines it.
+ *
+ * <p>The margin against ambient is continuous where the limiting rule is, but jumps where a corner starts to run
+ * away or the limiting rule changes; a bracketing method copes with both. Commons Math's
+ * {@link BracketingNthOrderBrentSolver} with {@link AllowedSolution#ABOVE_SIDE} returns a point whose margin is
+ * ≥ 0, so the reported ambient always passes. When the sweep passes throughout, the search steps on above the
+ * sweep (in sweep steps, at least 5 K) up to the part's Tj max, above which no junction can be cooler than its air;
+ * when it fails throughout, it steps down by the same steps for at most 200 K.
+ */
+public final class MaximumAmbientSearch {
+
+    /** Resolution of the maximum ambient (K), design 2.5 / issue requirement. */
+    public static final double TOLERANCE_K = 0.1;
+    /** Evaluation budget of the refinement: a 5 K bracket needs about 6 bisections, Brent steps need fewer. */
+    private static final int MAX_EVALUATIONS = 60;
+    private static final double MIN_STEP_K = 5.0;
+    private static final double DOWNWARD_SPAN_K = 200.0;
+
+    private MaximumAmbientSearch() {
+    }
+
+    /**
+     * Searches one position.
+     *
+     * @param board    the prepared board
+     * @param policy   the policy
+     * @param index    the position's index on the board
+     * @param sweep    the sweep already computed
+     * @param settings solver settings
+     */
+    public static MaximumAmbient find(PreparedBoard board, Policy policy, int index, List<BoardAtAmbient> sweep,
+                                      SolverSettings settings) {
+        DoubleUnaryOperator margin = t -> marginAt(board, policy, index, t, settings);
+        double step = Math.max(MIN_STEP_K, board.board().ambient().stepK());
+        double tjMax = board.board().positions().get(index).part().ratings().tjMaxK();
+        int n = sweep.size();
+        double passT = Double.NaN;
+        double failT = Double.NaN;
+        for (int k = n - 1; k >= 0; k--) {
+            PositionAtAmbient p = sweep.get(k).positions().get(index);
+            if (passes(p)) {
+                passT = p.ambientK();
+                if (k + 1 < n) {
+                    failT = sweep.get(k + 1).ambientK();
+                }
+                break;
+            }
+        }
+        if (Double.isNaN(passT)) {
+            double lo = sweep.get(0).ambientK();
+            failT = lo;
+            for (double t = lo - step; t >= lo - DOWNWARD_SPAN_K; t -= step) {
+                if (margin.applyAsDouble(t) >= 0) {
+                    passT = t;
+                    break;
+                }
+                failT = t;
+            }
+            if (Double.isNaN(passT)) {
+                return new MaximumAmbient(MaximumAmbient.Status.NONE, 0.0);
+            }
+        } else if (Double.isNaN(failT)) {
+            for (double t = passT + step; ; t += step) {
+                double tt = Math.min(t, tjMax);
+                if (margin.applyAsDouble(tt) < 0) {
+                    failT = tt;
+                    break;
+                }
+                passT = tt;
+                if (tt >= tjMax) {
+                    return new MaximumAmbient(MaximumAmbient.Status.HOLDS_TO_LIMIT, tjMax);
+                }
+            }
+        }
+        return new MaximumAmbient(MaximumAmbient.Status.FOUND, refine(margin, passT, failT));
+    }
+
+    private static double refine(DoubleUnaryOperator margin, double passT, double failT) {
+        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-12, TOLERANCE_K, 1e-12, 3);
+        try {
+            double t = solver.solve(MAX_EVALUATIONS, margin::applyAsDouble, passT, failT, AllowedSolution.ABOVE_SIDE);
+            return margin.applyAsDouble(t) >= 0 ? t : passT;
+        } catch (MathIllegalStateException e) {
+            return passT;
+        }
+    }
+
+    private static boolean passes(PositionAtAmbient p) {
+        return p.status() == PointStatus.CONVERGED && p.margin() >= 0;
+    }
+
+    /** The position's margin at one ambient; runaway and unresolved points count as failing. */
+    static double marginAt(PreparedBoard board, Policy policy, int index, double ambientK, SolverSettings settings) {
+        PositionAtAmbient p = BoardSolver.solveAt(board, policy, ambientK, settings).positions().get(index);
+        if (p.status() != PointStatus.CONVERGED) {
+            return Math.min(p.margin(), -1.0);
+        }
+        return p.margin();
+    }
+}

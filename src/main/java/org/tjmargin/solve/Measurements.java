@@ -1,0 +1,53 @@
+package org.tjmargin.solve;
+
+import java.util.EnumMap;
+import java.util.Map;
+import org.tjmargin.circuit.ShuntRegulatorSpec;
+import org.tjmargin.circuit.StandoffClamp;
+import org.tjmargin.derating.Measure;
+import org.tjmargin.derating.RuleContext;
+
+/**
+ * The quantities derating rules see, read off an operating point: the one place that maps solver results to
+ * {@link Measure}s.
+ */
+final class Measurements {
+
+    /** Stand-in ratio (1) when a rating has fallen to zero at the point's temperature while power flows: any
+     * policy fails it, and it stays finite for the outputs. */
+    static final double RATIO_AT_ZERO_RATING = 1e9;
+
+    private Measurements() {
+    }
+
+    static RuleContext of(PositionSpec spec, PositionInstance inst, OperatingPoint p, double allowedW,
+                          double resistorAllowedW) {
+        Map<Measure, Double> v = new EnumMap<>(Measure.class);
+        v.put(Measure.JUNCTION_TEMPERATURE, p.tjK());
+        v.put(Measure.POWER_RATIO, ratio(p.diodePowerW(), allowedW));
+        double iz = p.circuit().diodeCurrentA();
+        if (spec.circuit().regulates()) {
+            v.put(Measure.KNEE_CURRENT_RATIO, iz / inst.diode().izkA());
+        }
+        v.put(Measure.MAX_CURRENT_RATIO, iz / spec.part().ratings().izmA());
+        if (spec.circuit() instanceof ShuntRegulatorSpec) {
+            v.put(Measure.RESISTOR_POWER_RATIO, ratio(p.circuit().resistorPowerW(), resistorAllowedW));
+        }
+        if (inst.circuit() instanceof StandoffClamp c && spec.part().standoffV() > 0) {
+            v.put(Measure.STANDOFF_RATIO, c.lineV() / spec.part().standoffV());
+        }
+        return new RuleContext(v, spec.part().ratings().tjMaxK());
+    }
+
+    /** What rules see of a corner without an operating point: the junction at the last temperature reached. */
+    static RuleContext unresolved(PositionSpec spec, double tjK) {
+        return new RuleContext(Map.of(Measure.JUNCTION_TEMPERATURE, tjK), spec.part().ratings().tjMaxK());
+    }
+
+    private static double ratio(double actual, double allowed) {
+        if (allowed > 0) {
+            return actual / allowed;
+        }
+        return actual > 0 ? RATIO_AT_ZERO_RATING : 0.0;
+    }
+}
