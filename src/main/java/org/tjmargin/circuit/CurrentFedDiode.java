@@ -17,27 +17,29 @@ public record CurrentFedDiode(double currentA) implements Circuit {
 
     @Override
     public CircuitPoint at(BreakdownDiode diode, double tjK) {
-        double v;
-        Region region;
-        if (currentA >= diode.izkA()) {
-            v = diode.breakdownVoltageV(currentA, tjK);
-            region = currentA >= diode.lineStartA() ? Region.BREAKDOWN : Region.KNEE;
-        } else {
-            // Invert the monotone sub-knee characteristic by bisection (see TheveninDrive for the budget).
-            double lo = 0;
-            double hi = diode.kneeVoltageV(tjK);
-            for (int i = 0; i < 200 && hi - lo > 1e-15 * hi; i++) {
-                double mid = 0.5 * (lo + hi);
-                if (diode.subKneeCurrentA(mid, tjK) < currentA) {
-                    lo = mid;
-                } else {
-                    hi = mid;
-                }
+        // The total reverse current rises monotonically with voltage: bisection for the voltage that carries the
+        // feed current, between 0 and the voltage the breakdown branch alone would need (200 halvings reach
+        // double resolution).
+        double lo = 0;
+        double hi = Math.max(diode.breakdownVoltageV(Math.max(currentA, diode.izkA()), tjK), 1e-9);
+        if (diode.reverseCurrentA(hi, tjK) < currentA) {
+            hi = diode.vz0V(tjK) + diode.rzOhm() * currentA;
+        }
+        for (int i = 0; i < 200 && hi - lo > 1e-15 * hi; i++) {
+            double mid = 0.5 * (lo + hi);
+            if (diode.reverseCurrentA(mid, tjK) < currentA) {
+                lo = mid;
+            } else {
+                hi = mid;
             }
-            v = 0.5 * (lo + hi);
+        }
+        double v = 0.5 * (lo + hi);
+        Region region;
+        if (v < diode.kneeVoltageV(tjK)) {
             region = Region.BELOW_KNEE;
+        } else {
+            region = (v - diode.vz0V(tjK)) / diode.rzOhm() >= diode.lineStartA() ? Region.BREAKDOWN : Region.KNEE;
         }
         return new CircuitPoint(v, currentA, v * currentA, 0.0, 0.0, region);
     }
-
 }

@@ -25,6 +25,31 @@ final class TheveninDrive {
      * @return {@code {voltageV, currentA, regionOrdinal}}
      */
     static double[] solve(BreakdownDiode d, double tjK, double vthV, double rthOhm) {
+        double g = d.excessLeakageConductanceS(tjK);
+        if (rthOhm == 0) {
+            double v = Math.max(0.0, vthV);
+            return new double[] {v, d.reverseCurrentA(v, tjK), regionAt(d, tjK, v)};
+        }
+        if (g > 0) {
+            // Excess leakage is a conductance across the diode: fold it into the source (Norton–Thevenin), solve
+            // the remaining characteristic, and add its current back.
+            double vth2 = vthV / (1 + g * rthOhm);
+            double rth2 = rthOhm / (1 + g * rthOhm);
+            double[] s = solveCharacteristic(d, tjK, vth2, rth2);
+            s[1] += g * s[0];
+            return s;
+        }
+        return solveCharacteristic(d, tjK, vthV, rthOhm);
+    }
+
+    private static double regionAt(BreakdownDiode d, double tjK, double v) {
+        if (v < d.kneeVoltageV(tjK)) {
+            return Region.BELOW_KNEE.ordinal();
+        }
+        return (v - d.vz0V(tjK)) / d.rzOhm() >= d.lineStartA() ? Region.BREAKDOWN.ordinal() : Region.KNEE.ordinal();
+    }
+
+    private static double[] solveCharacteristic(BreakdownDiode d, double tjK, double vthV, double rthOhm) {
         double vz0 = d.vz0V(tjK);
         double lineI = (vthV - vz0) / (rthOhm + d.rzOhm());
         if (lineI >= d.lineStartA()) {
@@ -48,10 +73,6 @@ final class TheveninDrive {
         }
         if (vthV <= 0) {
             return new double[] {0.0, 0.0, Region.BELOW_KNEE.ordinal()};
-        }
-        if (!d.leakage().isKnown() || rthOhm == 0) {
-            double v = vthV;
-            return new double[] {v, d.subKneeCurrentA(v, tjK), Region.BELOW_KNEE.ordinal()};
         }
         // Below the knee: (Vth − V)/Rth − I_sub(V) = 0 for V in [0, min(Vth, Vzk)], decreasing in V.
         double lo = 0;

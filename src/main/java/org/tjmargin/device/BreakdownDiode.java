@@ -10,7 +10,7 @@ package org.tjmargin.device;
  * specified) up to the knee voltage the current rises exponentially, interpolated log-linearly between
  * {@code (Vr, Ir(Tj))} and {@code (Vzk(Tj), Izk)} (a soft knee, monotone and continuous; common practice, no
  * single source); below {@code Vr} the leakage is taken proportional to voltage. Without leakage data the part
- * conducts nothing below its knee. The leakage voltage point moves with the knee voltage, in proportion, so the
+ * conducts nothing below {@link #KNEE_CLOSURE}{@code ·Vzk} and the knee closes linearly above it. The leakage voltage point moves with the knee voltage, in proportion, so the
  * ordering {@code Vr < Vzk} holds at every temperature.
  *
  * @param vz0At25V   zero-current intercept of the breakdown line at {@code Tj = 25 °C} (V)
@@ -23,6 +23,18 @@ package org.tjmargin.device;
  */
 public record BreakdownDiode(double vz0At25V, double rzOhm, double iztA, double izkA, KneeModel knee,
                              TemperatureCoefficient tc, Leakage leakage) {
+
+    /**
+     * Without leakage data, the fraction of the knee voltage at which the reverse current is taken to start (1):
+     * 2 % below the knee, steep enough that no divider result changes visibly, yet continuous (modelling choice).
+     */
+    public static final double KNEE_CLOSURE = 0.98;
+
+    /**
+     * Lowest knee voltage accepted, as a fraction of the voltage at the test current (1). Real knees drop a few
+     * per cent (low-voltage parts a few tens of per cent); half the voltage means inconsistent data.
+     */
+    public static final double MIN_KNEE_FRACTION = 0.5;
 
     public BreakdownDiode {
         if (!(vz0At25V > 0) || !Double.isFinite(vz0At25V)) {
@@ -38,6 +50,12 @@ public record BreakdownDiode(double vz0At25V, double rzOhm, double iztA, double 
             throw new IllegalArgumentException("knee model, temperature coefficient and leakage are required");
         }
         double kneeAt25V = voltageOnCharacteristic(vz0At25V, rzOhm, iztA, knee, izkA);
+        double testAt25V = vz0At25V + rzOhm * iztA;
+        if (!(kneeAt25V >= MIN_KNEE_FRACTION * testAt25V)) {
+            throw new IllegalArgumentException("the knee voltage " + kneeAt25V + " V lies more than "
+                    + Math.round(100 * (1 - MIN_KNEE_FRACTION)) + " % below the test-current voltage " + testAt25V
+                    + " V: knee impedance and knee current do not describe a breakdown diode");
+        }
         if (leakage.isKnown() && !(leakage.vrV() < kneeAt25V)) {
             throw new IllegalArgumentException("leakage test voltage " + leakage.vrV()
                     + " V must lie below the knee voltage " + kneeAt25V + " V");
@@ -104,19 +122,27 @@ public record BreakdownDiode(double vz0At25V, double rzOhm, double iztA, double 
     }
 
     /**
-     * Current below the knee (out of regulation) at a reverse voltage under the knee voltage.
+     * Current below the knee (out of regulation) at a reverse voltage under the knee voltage, without the excess
+     * leakage of {@link #excessLeakageConductanceS}.
      *
      * @param voltageV reverse voltage (V), {@code 0 ≤ V ≤ Vzk(Tj)}
      * @param tjK      junction temperature (K)
      * @return reverse current (A), ≤ {@code Izk}
      */
     public double subKneeCurrentA(double voltageV, double tjK) {
-        if (!leakage.isKnown() || voltageV <= 0) {
+        if (voltageV <= 0) {
             return 0.0;
         }
         double vzk = kneeVoltageV(tjK);
-        double vrT = leakage.vrV() * vzk / kneeVoltageV(Celsius.T25_K);
-        double irT = Math.min(leakage.currentAtTestVoltageA(tjK), izkA);
+        if (!leakage.isKnown()) {
+            // No leakage data: the knee closes along a straight segment from zero current at
+            // KNEE_CLOSURE·Vzk to Izk at Vzk, so that current and dissipation stay continuous in voltage and
+            // temperature (a vertical edge would leave the heat balance without a root at the edge).
+            double v0 = KNEE_CLOSURE * vzk;
+            return voltageV <= v0 ? 0.0 : izkA * Math.min(1.0, (voltageV - v0) / (vzk - v0));
+        }
+        double vrT = leakageVoltageV(vzk);
+        double irT = Math.min(leakage.currentAtTestVoltageA(tjK), leakageSplitA());
         if (voltageV <= vrT) {
             return irT * voltageV / vrT;
         }
@@ -125,6 +151,57 @@ public record BreakdownDiode(double vz0At25V, double rzOhm, double iztA, double 
         }
         double f = (voltageV - vrT) / (vzk - vrT);
         return irT * Math.pow(izkA / irT, f);
+    }
+
+    /**
+     * Leakage beyond half the knee current, as a conductance in parallel with the whole characteristic (S).
+     *
+     * <p>Leakage is never capped: it keeps doubling with temperature, which is what lets a hot clamp run away. The
+     * soft-knee interpolation needs {@code Ir < Izk}, so the leakage up to {@code Izk/2} shapes the knee and any
+     * excess flows through this parallel, ohmic conductance {@code (Ir(Tj) − Izk/2)/Vr(Tj)}. The split keeps the
+     * characteristic continuous in temperature and monotone in voltage at every temperature.
+     */
+    public double excessLeakageConductanceS(double tjK) {
+        if (!leakage.isKnown()) {
+            return 0.0;
+        }
+        double excess = leakage.currentAtTestVoltageA(tjK) - leakageSplitA();
+        return excess > 0 ? excess / leakageVoltageV(kneeVoltageV(tjK)) : 0.0;
+    }
+
+    /**
+     * Total reverse current at a voltage: the breakdown characteristic (or the sub-knee leakage below it) plus the
+     * excess leakage. Monotone in voltage.
+     */
+    public double reverseCurrentA(double voltageV, double tjK) {
+        double excess = excessLeakageConductanceS(tjK) * Math.max(0.0, voltageV);
+        if (voltageV < kneeVoltageV(tjK)) {
+            return subKneeCurrentA(voltageV, tjK) + excess;
+        }
+        double lineI = (voltageV - vz0V(tjK)) / rzOhm;
+        if (lineI >= lineStartA()) {
+            return lineI + excess;
+        }
+        // On the current-dependent knee: invert V(I) by bisection (monotone; 200 halvings reach double resolution).
+        double lo = izkA;
+        double hi = iztA;
+        for (int i = 0; i < 200 && hi - lo > 1e-15 * hi; i++) {
+            double mid = 0.5 * (lo + hi);
+            if (breakdownVoltageV(mid, tjK) < voltageV) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return 0.5 * (lo + hi) + excess;
+    }
+
+    private double leakageSplitA() {
+        return 0.5 * izkA;
+    }
+
+    private double leakageVoltageV(double kneeAtTjV) {
+        return leakage.vrV() * kneeAtTjV / kneeVoltageV(Celsius.T25_K);
     }
 
     /** Copy with the breakdown line shifted by {@code deltaV} (a tolerance corner of {@code Vz}). */

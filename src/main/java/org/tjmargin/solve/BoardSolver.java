@@ -24,8 +24,9 @@ import org.tjmargin.thermal.Enclosure;
  */
 public final class BoardSolver {
 
-    /** Air-balance search: cap 1000 K of rise (any real enclosure fails long before), tolerance 1e-9 K, budget 100. */
-    static final SolverSettings AIR_BALANCE = new SolverSettings(1000.0, 1e-9, 100);
+    /** Air-balance search: cap 1000 K of rise (any real enclosure fails long before), tolerance 1e-9 K, budget 200, steps
+     * of at most 50 K. */
+    static final SolverSettings AIR_BALANCE = new SolverSettings(1000.0, 1e-9, 200, 50.0);
 
     private BoardSolver() {
     }

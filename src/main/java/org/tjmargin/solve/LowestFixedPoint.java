@@ -20,8 +20,10 @@ import org.apache.commons.math3.exception.MathIllegalStateException;
  *   (R. P. Brent, <i>Algorithms for Minimization without Derivatives</i>, 1973, ch. 4; the Commons Math
  *   {@link BrentSolver}).</li>
  * </ul>
- * If {@code g} stops increasing while still negative (loop gain at or above 1), the steps expand geometrically up to
- * the cap; no sign change below the cap means no fixed point there: runaway. Every search has an evaluation budget
+ * Every step is capped at {@link SolverSettings#maxStepK()}, because when {@code P} first falls and later rises
+ * with temperature (a regulator whose clamp-like leakage takes over when hot) one long step could land beyond a
+ * pair of roots. If {@code g} stops increasing while still negative (loop gain at or above 1), the steps expand
+ * geometrically (within the cap on each step) up to the search cap; no sign change below the cap means no fixed point there: runaway. Every search has an evaluation budget
  * and ends with a typed outcome.
  *
  * <p>Stateless and thread-safe: each call builds its own Brent solver.
@@ -31,6 +33,9 @@ public final class LowestFixedPoint {
     /** Step for the central-difference loop gain (same unit as x): small against any thermal scale, large against
      * the 1e-10 tolerance, so the difference quotient keeps about six significant digits. */
     private static final double GAIN_STEP = 1e-4;
+
+    /** Largest residual accepted from a bracketed solve (same unit as x): anything larger means a jump of F. */
+    static final double ACCEPTED_RESIDUAL = 1e-6;
 
     private LowestFixedPoint() {
     }
@@ -50,13 +55,14 @@ public final class LowestFixedPoint {
         int evals = 0;
 
         double xa = x0;
-        double ga = xa - map.applyAsDouble(xa);
+        double ga = xa - heat(map, xa);
         evals++;
         if (ga >= -tol) {
             return root(map, xa, ga, evals, settings);
         }
-        double xb = Math.min(xa - ga, cap);
-        double gb = xb - map.applyAsDouble(xb);
+        final double maxStep = settings.maxStepK();
+        double xb = Math.min(xa + Math.min(-ga, maxStep), cap);
+        double gb = xb - heat(map, xb);
         evals++;
         while (evals < budget) {
             if (Math.abs(gb) <= tol) {
@@ -79,23 +85,34 @@ public final class LowestFixedPoint {
             }
             xa = xb;
             ga = gb;
-            xb = Math.min(next, cap);
-            gb = xb - map.applyAsDouble(xb);
+            xb = Math.min(Math.min(next, xb + maxStep), cap);
+            gb = xb - heat(map, xb);
             evals++;
         }
         return new FixedPointOutcome.Exhausted(xb, gb, evals);
     }
 
+    /** {@code F(x)}, with an overflowing or undefined value read as unbounded heating (+∞), never NaN. */
+    private static double heat(DoubleUnaryOperator map, double x) {
+        double f = map.applyAsDouble(x);
+        return f < Double.POSITIVE_INFINITY ? f : Double.POSITIVE_INFINITY;
+    }
+
     private static FixedPointOutcome brent(DoubleUnaryOperator map, double lo, double hi, int evalsSoFar,
                                            SolverSettings settings) {
-        // Relative accuracy 1e-15 (two ulps at 300 K-scale values); absolute as the settings; function value
-        // accuracy a tenth of it so the residual, not only the bracket, meets the tolerance.
-        BrentSolver solver = new BrentSolver(1e-15, settings.toleranceK(), 0.1 * settings.toleranceK());
+        // The bracket is shrunk to 1 % of the tolerance (relative 1e-15, a few ulps at 300 K-scale values) because
+        // where g is steep (loop gain far below zero) the residual is the bracket times the slope; the function value
+        // accuracy is a tenth of the tolerance so that a flat g stops on the residual instead.
+        BrentSolver solver = new BrentSolver(1e-15, 0.01 * settings.toleranceK(), 0.1 * settings.toleranceK());
         int left = settings.maxEvaluations() - evalsSoFar;
         try {
             double x = solver.solve(left, t -> t - map.applyAsDouble(t), lo, hi, 0.5 * (lo + hi));
             int evals = evalsSoFar + solver.getEvaluations();
             double g = x - map.applyAsDouble(x);
+            if (!(Math.abs(g) <= ACCEPTED_RESIDUAL)) {
+                // A sign change without a zero: F jumps across the diagonal. No operating point to stand behind.
+                return new FixedPointOutcome.Exhausted(x, g, evals + 1);
+            }
             return root(map, x, g, evals + 1, settings);
         } catch (MathIllegalStateException e) {
             return new FixedPointOutcome.Exhausted(hi, hi - map.applyAsDouble(hi), settings.maxEvaluations());
