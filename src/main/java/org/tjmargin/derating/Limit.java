@@ -3,7 +3,17 @@ package org.tjmargin.derating;
 /**
  * The value a rule holds its quantity against, possibly depending on the part.
  */
-public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.LowerOf {
+public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.LowerOf, Limit.TemperatureCurve {
+
+    /** The temperature a {@link TemperatureCurve} is read at. */
+    enum Basis {
+        /** The junction. */
+        JUNCTION,
+        /** The part's rating reference point (lead, case or air, as its rating curve states). */
+        REFERENCE,
+        /** The air around the part inside the enclosure. */
+        LOCAL_AIR
+    }
 
     /** The limit for this context (SI, the rule's unit). */
     double valueFor(RuleContext context);
@@ -72,6 +82,79 @@ public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.Lower
         @Override
         public String describe() {
             return "lower of (" + a.describe() + ", " + b.describe() + ")";
+        }
+    }
+
+    /**
+     * A limit that depends on temperature: piecewise linear through its points, held constant beyond the ends
+     * (e.g. a power fraction that tightens above 100 °C).
+     *
+     * @param basis         which temperature
+     * @param temperaturesK breakpoint temperatures (K), strictly increasing
+     * @param values        the limit at each breakpoint
+     */
+    record TemperatureCurve(Basis basis, double[] temperaturesK, double[] values) implements Limit {
+        public TemperatureCurve {
+            temperaturesK = temperaturesK.clone();
+            values = values.clone();
+            if (basis == null || temperaturesK.length == 0 || temperaturesK.length != values.length) {
+                throw new IllegalArgumentException("a temperature curve needs a basis and matching, non-empty "
+                        + "temperature and value lists");
+            }
+            for (int i = 0; i < temperaturesK.length; i++) {
+                if (!Double.isFinite(temperaturesK[i]) || !Double.isFinite(values[i])
+                        || (i > 0 && !(temperaturesK[i] > temperaturesK[i - 1]))) {
+                    throw new IllegalArgumentException("temperature curve points must be finite with temperatures "
+                            + "strictly increasing; bad point " + i);
+                }
+            }
+        }
+
+        @Override
+        public double valueFor(RuleContext context) {
+            double t = context.temperatureK(basis);
+            int n = temperaturesK.length;
+            if (t <= temperaturesK[0]) {
+                return values[0];
+            }
+            for (int i = 1; i < n; i++) {
+                if (t <= temperaturesK[i]) {
+                    double f = (t - temperaturesK[i - 1]) / (temperaturesK[i] - temperaturesK[i - 1]);
+                    return values[i - 1] + f * (values[i] - values[i - 1]);
+                }
+            }
+            return values[n - 1];
+        }
+
+        @Override
+        public String describe() {
+            StringBuilder sb = new StringBuilder("by ").append(basis.name().toLowerCase(java.util.Locale.ROOT)
+                    .replace('_', ' ')).append(" temperature:");
+            for (int i = 0; i < temperaturesK.length; i++) {
+                sb.append(String.format(java.util.Locale.ROOT, " %.1f °C → %s", temperaturesK[i] - 273.15,
+                        Double.toString(values[i])));
+                if (i + 1 < temperaturesK.length) {
+                    sb.append(',');
+                }
+            }
+            return sb.toString();
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof TemperatureCurve t && t.basis == basis
+                    && java.util.Arrays.equals(t.temperaturesK, temperaturesK) && java.util.Arrays.equals(t.values, values);
+        }
+
+        @Override
+        public int hashCode() {
+            return basis.hashCode() * 31 + java.util.Arrays.hashCode(temperaturesK) * 17
+                    + java.util.Arrays.hashCode(values);
+        }
+
+        @Override
+        public String toString() {
+            return describe();
         }
     }
 }

@@ -28,6 +28,21 @@ public enum Measure {
         this.temperature = temperature;
     }
 
+    /** The key used in profile files, e.g. {@code junction-temperature}. */
+    public String key() {
+        return name().toLowerCase(java.util.Locale.ROOT).replace('_', '-');
+    }
+
+    /** The measure with profile key {@code key}, if any. */
+    public static java.util.Optional<Measure> fromKey(String key) {
+        for (Measure m : values()) {
+            if (m.key().equals(key)) {
+                return java.util.Optional.of(m);
+            }
+        }
+        return java.util.Optional.empty();
+    }
+
     /** Human description. */
     public String description() {
         return description;

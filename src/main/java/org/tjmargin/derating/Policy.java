@@ -36,6 +36,44 @@ public record Policy(String name, String provenance, List<Rule> rules) {
                         new Limit.Fixed(1.0), "definition of the breakdown region (knee current)")));
     }
 
+    /**
+     * A policy that extends {@code base}: the base's rules in their order, each replaced by the override of the same
+     * id where there is one, followed by the new rules (design 2.5: a profile can extend another and override
+     * rules).
+     */
+    public static Policy extending(Policy base, String name, String provenance, List<Rule> rules) {
+        List<Rule> out = new ArrayList<>();
+        List<Rule> fresh = new ArrayList<>(rules);
+        for (Rule r : base.rules()) {
+            Rule replacement = null;
+            for (Rule o : rules) {
+                if (o.id().equals(r.id())) {
+                    replacement = o;
+                }
+            }
+            out.add(replacement == null ? r : replacement);
+            if (replacement != null) {
+                fresh.remove(replacement);
+            }
+        }
+        out.addAll(fresh);
+        return new Policy(name, provenance, out);
+    }
+
+    /**
+     * This policy with the {@link #builtInMinimum() built-in minimum} added where it has no rule of the same id:
+     * whatever a profile says, a junction above Tj max or a regulator below its knee fails.
+     */
+    public Policy withBuiltInMinimum() {
+        List<Rule> out = new ArrayList<>(rules);
+        for (Rule r : builtInMinimum().rules()) {
+            if (rule(r.id()).isEmpty()) {
+                out.add(r);
+            }
+        }
+        return new Policy(name, provenance, out);
+    }
+
     /** Every rule that applies to {@code context}, checked. */
     public List<RuleCheck> check(RuleContext context) {
         List<RuleCheck> out = new ArrayList<>(rules.size());

@@ -8,10 +8,12 @@ import java.util.OptionalDouble;
  * What a rule sees of one operating point: the measured quantities that apply, and the part's constants that
  * limits may refer to.
  *
- * @param values measured quantities (SI), only those that apply
- * @param tjMaxK the part's maximum junction temperature (K)
+ * @param values     measured quantities (SI), only those that apply
+ * @param tjMaxK     the part's maximum junction temperature (K)
+ * @param referenceK temperature of the part's rating reference point (K)
+ * @param tLocalK    temperature of the air around the part (K)
  */
-public record RuleContext(Map<Measure, Double> values, double tjMaxK) {
+public record RuleContext(Map<Measure, Double> values, double tjMaxK, double referenceK, double tLocalK) {
 
     public RuleContext {
         EnumMap<Measure, Double> copy = new EnumMap<>(Measure.class);
@@ -22,6 +24,15 @@ public record RuleContext(Map<Measure, Double> values, double tjMaxK) {
             copy.put(e.getKey(), e.getValue());
         }
         values = Map.copyOf(copy);
+    }
+
+    /** The temperature a temperature-dependent limit is read at. */
+    public double temperatureK(Limit.Basis basis) {
+        return switch (basis) {
+            case JUNCTION -> values.getOrDefault(Measure.JUNCTION_TEMPERATURE, referenceK);
+            case REFERENCE -> referenceK;
+            case LOCAL_AIR -> tLocalK;
+        };
     }
 
     /** The value of {@code m}, if it applies here. */

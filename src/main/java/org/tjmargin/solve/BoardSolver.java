@@ -106,14 +106,14 @@ public final class BoardSolver {
                     least = k;
                 }
             } else if (out instanceof ThermalOutcome.Runaway r) {
-                ctx = Measurements.unresolved(spec, r.capK());
+                ctx = Measurements.unresolved(spec, r.capK(), tLocalK);
                 status = status.worse(PointStatus.RUNAWAY);
                 if (!hottestRunaway) {
                     hottestRunaway = true;
                     hottest = k;
                 }
             } else {
-                ctx = Measurements.unresolved(spec, ((ThermalOutcome.NotConverged) out).lastTjK());
+                ctx = Measurements.unresolved(spec, ((ThermalOutcome.NotConverged) out).lastTjK(), tLocalK);
                 status = status.worse(PointStatus.NOT_CONVERGED);
             }
             List<RuleCheck> checks = policy.check(ctx);

@@ -36,12 +36,13 @@ final class Measurements {
         if (inst.circuit() instanceof StandoffClamp c && spec.part().standoffV() > 0) {
             v.put(Measure.STANDOFF_RATIO, c.lineV() / spec.part().standoffV());
         }
-        return new RuleContext(v, spec.part().ratings().tjMaxK());
+        return new RuleContext(v, spec.part().ratings().tjMaxK(), p.referenceK(), p.tLocalK());
     }
 
     /** What rules see of a corner without an operating point: the junction at the last temperature reached. */
-    static RuleContext unresolved(PositionSpec spec, double tjK) {
-        return new RuleContext(Map.of(Measure.JUNCTION_TEMPERATURE, tjK), spec.part().ratings().tjMaxK());
+    static RuleContext unresolved(PositionSpec spec, double tjK, double tLocalK) {
+        return new RuleContext(Map.of(Measure.JUNCTION_TEMPERATURE, tjK), spec.part().ratings().tjMaxK(), tjK,
+                tLocalK);
     }
 
     private static double ratio(double actual, double allowed) {

@@ -1,0 +1,169 @@
+package org.tjmargin.report;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.List;
+import org.tjmargin.derating.Measure;
+import org.tjmargin.derating.Rule;
+import org.tjmargin.derating.RuleCheck;
+import org.tjmargin.solve.AnalysisResult;
+import org.tjmargin.solve.BoardAtAmbient;
+import org.tjmargin.solve.CornerPoint;
+import org.tjmargin.solve.OperatingPoint;
+import org.tjmargin.solve.PositionAtAmbient;
+import org.tjmargin.solve.PositionResult;
+import org.tjmargin.solve.PositionSpec;
+import org.tjmargin.solve.ThermalOutcome;
+import org.tjmargin.solve.WorstCheck;
+
+/**
+ * {@code results.json} (design section 4): per position the identifier, verdict, limiting rule, maximum ambient and,
+ * for each ambient of the sweep, the hottest and the least-current corner with the quantities of design 2.3, every
+ * rule at its worst corner; and every corner at the design's highest ambient. SI units with the unit in the key
+ * ({@code tjC}, {@code powerW}, {@code currentA}, {@code voltageV}, {@code ambientC}); temperatures in °C.
+ */
+public final class ResultsJson {
+
+    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    private ResultsJson() {
+    }
+
+    /** Renders the whole result. */
+    public static String render(AnalysisResult r, List<String> cautions, Provenance provenance) {
+        ObjectNode root = MAPPER.createObjectNode();
+        root.putObject("tool").put("name", "tjmargin").put("version", provenance.toolVersion());
+        root.put("design", r.board().name());
+        root.put("verdict", r.verdict().name());
+        ObjectNode amb = root.putObject("ambient");
+        amb.put("minC", Labels.celsius(r.board().ambient().minK()));
+        amb.put("maxC", Labels.celsius(r.board().ambient().maxK()));
+        amb.put("points", r.board().ambient().points());
+        ObjectNode pol = root.putObject("policy");
+        pol.put("name", r.policy().name());
+        pol.put("provenance", r.policy().provenance());
+        ArrayNode rules = pol.putArray("rules");
+        for (Rule rule : r.policy().rules()) {
+            rules.addObject().put("id", rule.id()).put("title", rule.title()).put("measure", rule.measure().name())
+                    .put("bound", rule.bound().name()).put("limit", rule.limit().describe())
+                    .put("provenance", rule.provenance());
+        }
+        ArrayNode positions = root.putArray("positions");
+        for (int i = 0; i < r.positions().size(); i++) {
+            positions.add(position(r, i));
+        }
+        ArrayNode inputs = root.putArray("inputs");
+        for (Provenance.InputDigest d : provenance.inputs()) {
+            inputs.addObject().put("path", d.path()).put("sha256", d.sha256());
+        }
+        ArrayNode c = root.putArray("cautions");
+        cautions.forEach(c::add);
+        try {
+            return MAPPER.writeValueAsString(root) + "\n";
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("results could not be rendered as JSON", e);
+        }
+    }
+
+    private static ObjectNode position(AnalysisResult r, int i) {
+        PositionResult pr = r.positions().get(i);
+        PositionSpec spec = r.board().positions().get(i);
+        ObjectNode o = MAPPER.createObjectNode();
+        o.put("id", pr.id());
+        o.put("part", spec.part().id());
+        o.put("circuit", Labels.circuitKind(spec.circuit()));
+        o.put("verdict", pr.verdict().name());
+        o.put("limitingRule", pr.limitingRuleId());
+        o.put("worstMargin", pr.worstMargin());
+        o.put("worstAmbientC", Labels.celsius(pr.worstAmbientK()));
+        o.put("maxAmbientStatus", pr.maxAmbient().status().name());
+        if (pr.maxAmbient().status() == org.tjmargin.solve.MaximumAmbient.Status.NONE) {
+            o.putNull("maxAmbientC");
+        } else {
+            o.put("maxAmbientC", Labels.celsius(pr.maxAmbient().ambientK()));
+        }
+        if (pr.runaway().isPresent()) {
+            o.put("runawayOnsetC", Labels.celsius(pr.runaway().get().ambientK()));
+            o.put("runawayOnsetAtOrBelow", pr.runaway().get().atOrBelowSearch());
+        } else {
+            o.putNull("runawayOnsetC");
+        }
+        pr.regulation().ifPresentOrElse(reg -> o.putObject("regulation")
+                .put("lineInstantVPerV", reg.lineInstantVPerV())
+                .put("lineEquilibriumVPerV", reg.lineEquilibriumVPerV())
+                .put("loadInstantVPerA", reg.loadInstantVPerA())
+                .put("loadEquilibriumVPerA", reg.loadEquilibriumVPerA())
+                .put("tLocalC", Labels.celsius(reg.tLocalK())), () -> o.putNull("regulation"));
+        ArrayNode notes = o.putArray("notes");
+        pr.notes().forEach(notes::add);
+        ArrayNode points = o.putArray("points");
+        for (BoardAtAmbient b : r.sweep()) {
+            PositionAtAmbient p = b.positions().get(i);
+            ObjectNode pt = points.addObject();
+            pt.put("ambientC", Labels.celsius(p.ambientK()));
+            pt.put("tLocalC", Labels.celsius(p.tLocalK()));
+            pt.put("enclosureRiseK", b.enclosureRiseK());
+            pt.put("status", p.status().name());
+            pt.put("margin", p.margin());
+            pt.put("limitingRule", p.limitingRuleId());
+            p.hottest().ifPresent(c -> pt.set("hottest", corner(c)));
+            p.leastCurrent().ifPresent(c -> pt.set("leastCurrent", corner(c)));
+            ArrayNode checks = pt.putArray("rules");
+            for (WorstCheck w : p.worst()) {
+                checks.add(check(w.check(), p.corners().get(w.cornerIndex()).corner().label()));
+            }
+        }
+        ArrayNode corners = o.putArray("cornersAtMaxAmbient");
+        for (CornerPoint c : r.atMaximumAmbient().positions().get(i).corners()) {
+            corners.add(corner(c));
+        }
+        return o;
+    }
+
+    private static ObjectNode check(RuleCheck c, String corner) {
+        boolean t = c.measure() == Measure.JUNCTION_TEMPERATURE;
+        ObjectNode o = MAPPER.createObjectNode();
+        o.put("rule", c.ruleId());
+        o.put("measure", c.measure().name());
+        o.put("bound", c.bound().name());
+        o.put("actual", t ? Labels.celsius(c.actual()) : c.actual());
+        o.put("limit", t ? Labels.celsius(c.limit()) : c.limit());
+        o.put("unit", t ? "°C" : c.measure().unit());
+        o.put("margin", c.margin());
+        o.put("difference", c.difference());
+        o.put("differenceUnit", t ? "K" : c.measure().unit());
+        o.put("corner", corner);
+        return o;
+    }
+
+    /** One corner's point with the quantities of design 2.3. */
+    static ObjectNode corner(CornerPoint c) {
+        ObjectNode o = MAPPER.createObjectNode();
+        o.put("corner", c.corner().label());
+        o.put("status", c.status().name());
+        if (c.outcome() instanceof ThermalOutcome.Converged conv) {
+            OperatingPoint p = conv.point();
+            o.put("tjC", Labels.celsius(p.tjK()));
+            o.put("tLocalC", Labels.celsius(p.tLocalK()));
+            o.put("referenceC", Labels.celsius(p.referenceK()));
+            o.put("voltageV", p.circuit().voltageV());
+            o.put("currentA", p.circuit().diodeCurrentA());
+            o.put("powerW", p.diodePowerW());
+            o.put("resistorPowerW", p.circuit().resistorPowerW());
+            o.put("loadCurrentA", p.circuit().loadCurrentA());
+            o.put("region", p.circuit().region().name());
+            o.put("allowedPowerW", c.allowedPowerW());
+            o.put("iterations", p.evaluations());
+            o.put("loopGain", p.loopGain());
+            o.put("residualK", p.residualK());
+        } else if (c.outcome() instanceof ThermalOutcome.NotConverged n) {
+            o.put("lastTjC", Labels.celsius(n.lastTjK()));
+            o.put("residualK", n.residualK());
+            o.put("iterations", n.evaluations());
+        }
+        return o;
+    }
+}

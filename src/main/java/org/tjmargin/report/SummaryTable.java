@@ -1,0 +1,100 @@
+package org.tjmargin.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.tjmargin.solve.AnalysisResult;
+import org.tjmargin.solve.OperatingPoint;
+import org.tjmargin.solve.PositionAtAmbient;
+import org.tjmargin.solve.PositionResult;
+import org.tjmargin.solve.PositionSpec;
+import org.tjmargin.units.Dimension;
+import org.tjmargin.units.Quantities;
+
+/**
+ * The terminal summary: one row per position with its verdict, the hottest corner at the design's highest ambient
+ * (junction temperature, diode power, output voltage), the least diode current anywhere in the sweep, the maximum
+ * ambient and the limiting rule; then notes on estimated values and the cautions.
+ */
+public final class SummaryTable {
+
+    private static final String[] HEADER = {"position", "circuit", "verdict", "Tj hot", "P diode", "Vout",
+        "min Iz", "max ambient", "limiting rule", "margin"};
+
+    private SummaryTable() {
+    }
+
+    /** Renders the summary as plain text (UTF-8, fixed-width columns). */
+    public static String render(AnalysisResult r, List<String> cautions) {
+        List<String[]> rows = new ArrayList<>();
+        rows.add(HEADER);
+        for (int i = 0; i < r.positions().size(); i++) {
+            rows.add(row(r, i));
+        }
+        int[] w = new int[HEADER.length];
+        for (String[] row : rows) {
+            for (int c = 0; c < row.length; c++) {
+                w[c] = Math.max(w[c], row[c].codePointCount(0, row[c].length()));
+            }
+        }
+        StringBuilder sb = new StringBuilder();
+        sb.append(r.board().name()).append(" — policy: ").append(r.policy().name()).append(", ambient ")
+                .append(String.format(Locale.ROOT, "%.1f … %.1f °C", Labels.celsius(r.board().ambient().minK()),
+                        Labels.celsius(r.board().ambient().maxK())))
+                .append(", design verdict ").append(r.verdict()).append('\n');
+        for (int k = 0; k < rows.size(); k++) {
+            String[] row = rows.get(k);
+            for (int c = 0; c < row.length; c++) {
+                sb.append(pad(row[c], w[c])).append(c + 1 < row.length ? "  " : "");
+            }
+            sb.append('\n');
+            if (k == 0) {
+                for (int c = 0; c < row.length; c++) {
+                    sb.append("-".repeat(w[c])).append(c + 1 < row.length ? "  " : "");
+                }
+                sb.append('\n');
+            }
+        }
+        sb.append("(Tj hot, P diode, Vout: hottest corner at the highest ambient; min Iz: least diode current over the "
+                + "sweep)\n");
+        for (PositionResult pr : r.positions()) {
+            for (String n : pr.notes()) {
+                sb.append("note ").append(pr.id()).append(": ").append(n).append('\n');
+            }
+            pr.runaway().ifPresent(o -> sb.append("note ").append(pr.id()).append(": thermal runaway begins ")
+                    .append(o.atOrBelowSearch() ? "at or below " : "at ")
+                    .append(String.format(Locale.ROOT, "%.1f °C ambient", Labels.celsius(o.ambientK()))).append('\n'));
+        }
+        for (String c : cautions) {
+            sb.append("CAUTION: ").append(c).append('\n');
+        }
+        return sb.toString();
+    }
+
+    private static String[] row(AnalysisResult r, int i) {
+        PositionResult pr = r.positions().get(i);
+        PositionSpec spec = r.board().positions().get(i);
+        PositionAtAmbient top = r.atMaximumAmbient().positions().get(i);
+        OperatingPoint hot = top.hottest().flatMap(c -> c.point()).orElse(null);
+        double minIz = Double.POSITIVE_INFINITY;
+        for (var b : r.sweep()) {
+            var lc = b.positions().get(i).leastCurrent().flatMap(c -> c.point());
+            if (lc.isPresent()) {
+                minIz = Math.min(minIz, lc.get().circuit().diodeCurrentA());
+            }
+        }
+        String tj = hot == null ? (top.status().name().toLowerCase(Locale.ROOT)) : Quantities.format(hot.tjK(),
+                Dimension.TEMPERATURE);
+        return new String[] {pr.id(), Labels.circuitKind(spec.circuit()), pr.verdict().name(), tj,
+            hot == null ? "-" : Quantities.format(hot.diodePowerW(), Dimension.POWER),
+            hot == null ? "-" : Quantities.format(hot.circuit().voltageV(), Dimension.VOLTAGE),
+            Double.isInfinite(minIz) ? "-" : Quantities.format(minIz, Dimension.CURRENT),
+            Labels.maxAmbient(pr.maxAmbient()), pr.limitingRuleId(),
+            String.format(Locale.ROOT, "%.1f %%", 100 * pr.worstMargin())};
+    }
+
+    private static String pad(String s, int w) {
+        int n = s.codePointCount(0, s.length());
+        return s + " ".repeat(Math.max(0, w - n));
+    }
+}
