@@ -50,9 +50,50 @@ final class FosterLeastSquares {
     private FosterLeastSquares() {
     }
 
+    /**
+     * Two passes: first the resistances alone with the start's time constants held (a well-conditioned problem
+     * that cannot wander off), then all parameters from there. A start far from the data otherwise lets a fast
+     * stage run to its time-constant bound, where the clamped steps stall the optimizer. The better of the two
+     * passes (lower RMS) is returned; evaluations and iterations are the totals.
+     */
     static FosterFitOutcome fit(Model model, double[] startR, double[] startTau, double tauMinS, double tauMaxS,
             FosterFitSettings settings, FosterFitOutcome.Basis basis) {
+        Tracker tracker = new Tracker(startR.length);
+        Pass first;
+        try {
+            first = optimise(model, startR, startTau, false, tauMinS, tauMaxS, settings, tracker);
+        } catch (TooManyEvaluationsException | TooManyIterationsException e) {
+            return tracker.failure(basis, FosterFitOutcome.Reason.BUDGET_EXHAUSTED, e.getMessage());
+        } catch (ConvergenceException e) {
+            return tracker.failure(basis, FosterFitOutcome.Reason.NOT_CONVERGED, e.getMessage());
+        } catch (PeakSearchFailure e) {
+            return tracker.failure(basis, FosterFitOutcome.Reason.PEAK_SEARCH_NOT_CONVERGED, e.getMessage());
+        }
+        Pass best = first;
+        try {
+            Pass second = optimise(model, first.r, first.tau, true, tauMinS, tauMaxS, settings, tracker);
+            if (second.rms <= first.rms) {
+                best = second;
+            }
+        } catch (TooManyEvaluationsException | TooManyIterationsException e) {
+            return tracker.failure(basis, FosterFitOutcome.Reason.BUDGET_EXHAUSTED, e.getMessage());
+        } catch (ConvergenceException e) {
+            return tracker.failure(basis, FosterFitOutcome.Reason.NOT_CONVERGED, e.getMessage());
+        } catch (PeakSearchFailure e) {
+            return tracker.failure(basis, FosterFitOutcome.Reason.PEAK_SEARCH_NOT_CONVERGED, e.getMessage());
+        }
+        return new FosterFitOutcome.Fitted(FosterNetwork.of(best.r, best.tau).sortedByTimeConstant(), basis, best.rms,
+                best.maxAbs, tracker.iterations, tracker.evaluations);
+    }
+
+    /** The end of one optimizer pass. */
+    private record Pass(double[] r, double[] tau, double rms, double maxAbs) {
+    }
+
+    private static Pass optimise(Model model, double[] startR, double[] startTau, boolean freeTau, double tauMinS,
+            double tauMaxS, FosterFitSettings settings, Tracker tracker) {
         int n = startR.length;
+        int width = freeTau ? 2 * n : n;
         double sumR = 0;
         for (double r : startR) {
             sumR += r;
@@ -61,24 +102,28 @@ final class FosterLeastSquares {
         double lnRMax = Math.log(sumR * R_CEILING_FACTOR);
         double lnTauMin = Math.log(tauMinS);
         double lnTauMax = Math.log(tauMaxS);
-        double[] start = new double[2 * n];
+        double[] start = new double[width];
         for (int i = 0; i < n; i++) {
-            start[2 * i] = Math.log(startR[i]);
-            start[2 * i + 1] = Math.log(startTau[i]);
+            start[freeTau ? 2 * i : i] = Math.log(startR[i]);
+            if (freeTau) {
+                start[2 * i + 1] = Math.log(startTau[i]);
+            }
         }
         int m = model.residualCount();
-        Tracker tracker = new Tracker(n);
         LeastSquaresBuilder builder = new LeastSquaresBuilder()
                 .start(start)
                 .target(new double[m])
-                .maxEvaluations(settings.maxEvaluations())
-                .maxIterations(settings.maxIterations())
+                .maxEvaluations(settings.maxEvaluations() - tracker.evaluations)
+                .maxIterations(settings.maxIterations() - tracker.iterations)
                 .lazyEvaluation(false)
                 .parameterValidator(p -> {
                     RealVector q = p.copy();
                     for (int i = 0; i < n; i++) {
-                        q.setEntry(2 * i, clamp(q.getEntry(2 * i), lnRMin, lnRMax));
-                        q.setEntry(2 * i + 1, clamp(q.getEntry(2 * i + 1), lnTauMin, lnTauMax));
+                        int ir = freeTau ? 2 * i : i;
+                        q.setEntry(ir, clamp(q.getEntry(ir), lnRMin, lnRMax));
+                        if (freeTau) {
+                            q.setEntry(2 * i + 1, clamp(q.getEntry(2 * i + 1), lnTauMin, lnTauMax));
+                        }
                     }
                     return q;
                 })
@@ -86,42 +131,42 @@ final class FosterLeastSquares {
                     double[] r = new double[n];
                     double[] tau = new double[n];
                     for (int i = 0; i < n; i++) {
-                        r[i] = Math.exp(p.getEntry(2 * i));
-                        tau[i] = Math.exp(p.getEntry(2 * i + 1));
+                        r[i] = Math.exp(p.getEntry(freeTau ? 2 * i : i));
+                        tau[i] = freeTau ? Math.exp(p.getEntry(2 * i + 1)) : startTau[i];
                     }
                     double[] residual = new double[m];
-                    double[][] jacobian = new double[m][2 * n];
-                    model.evaluate(r, tau, residual, jacobian);
+                    double[][] full = new double[m][2 * n];
+                    model.evaluate(r, tau, residual, full);
                     tracker.offer(r, tau, residual);
+                    double[][] jacobian = full;
+                    if (!freeTau) {
+                        jacobian = new double[m][n];
+                        for (int j = 0; j < m; j++) {
+                            for (int i = 0; i < n; i++) {
+                                jacobian[j][i] = full[j][2 * i];
+                            }
+                        }
+                    }
                     return new Pair<>(new ArrayRealVector(residual, false), new Array2DRowRealMatrix(jacobian, false));
                 });
         LevenbergMarquardtOptimizer optimizer = new LevenbergMarquardtOptimizer()
                 .withCostRelativeTolerance(settings.costRelativeTolerance())
                 .withParameterRelativeTolerance(settings.parameterRelativeTolerance())
                 .withOrthoTolerance(settings.orthoTolerance());
-        try {
-            LeastSquaresOptimizer.Optimum optimum = optimizer.optimize(builder.build());
-            RealVector p = optimum.getPoint();
-            double[] r = new double[n];
-            double[] tau = new double[n];
-            for (int i = 0; i < n; i++) {
-                r[i] = Math.exp(p.getEntry(2 * i));
-                tau[i] = Math.exp(p.getEntry(2 * i + 1));
-            }
-            double[] res = optimum.getResiduals().toArray();
-            double maxAbs = 0;
-            for (double v : res) {
-                maxAbs = Math.max(maxAbs, Math.abs(v));
-            }
-            return new FosterFitOutcome.Fitted(FosterNetwork.of(r, tau).sortedByTimeConstant(), basis,
-                    optimum.getRMS(), maxAbs, optimum.getIterations(), optimum.getEvaluations());
-        } catch (TooManyEvaluationsException | TooManyIterationsException e) {
-            return tracker.failure(basis, FosterFitOutcome.Reason.BUDGET_EXHAUSTED, e.getMessage());
-        } catch (ConvergenceException e) {
-            return tracker.failure(basis, FosterFitOutcome.Reason.NOT_CONVERGED, e.getMessage());
-        } catch (PeakSearchFailure e) {
-            return tracker.failure(basis, FosterFitOutcome.Reason.PEAK_SEARCH_NOT_CONVERGED, e.getMessage());
+        LeastSquaresOptimizer.Optimum optimum = optimizer.optimize(builder.build());
+        tracker.iterations += optimum.getIterations();
+        RealVector p = optimum.getPoint();
+        double[] r = new double[n];
+        double[] tau = new double[n];
+        for (int i = 0; i < n; i++) {
+            r[i] = Math.exp(p.getEntry(freeTau ? 2 * i : i));
+            tau[i] = freeTau ? Math.exp(p.getEntry(2 * i + 1)) : startTau[i];
         }
+        double maxAbs = 0;
+        for (double v : optimum.getResiduals().toArray()) {
+            maxAbs = Math.max(maxAbs, Math.abs(v));
+        }
+        return new Pass(r, tau, optimum.getRMS(), maxAbs);
     }
 
     private static double clamp(double v, double lo, double hi) {
@@ -132,6 +177,7 @@ final class FosterLeastSquares {
     private static final class Tracker {
         private final int n;
         private int evaluations;
+        private int iterations;
         private double bestRms = Double.POSITIVE_INFINITY;
         private double[] bestR;
         private double[] bestTau;

@@ -54,8 +54,14 @@ public final class PulseRatingFit {
         double tFirst = pulses[0].decayTimeConstantS();
         double tLast = pulses[m - 1].decayTimeConstantS();
         double[] startTau = ZthFit.spreadGeometrically(tFirst, tLast, stages);
-        double[] startR = new double[stages];
-        java.util.Arrays.fill(startR, riseK / p[m - 1] / stages);
+        // start as if each rating were a rectangle: Zth(width) ≈ ΔT/P
+        double[] equivalentT = new double[m];
+        double[] equivalentZ = new double[m];
+        for (int j = 0; j < m; j++) {
+            equivalentT[j] = pulses[j].decayTimeConstantS();
+            equivalentZ[j] = riseK / p[j];
+        }
+        double[] startR = ZthFit.startResistances(equivalentT, equivalentZ, startTau);
         FosterPeakSearch search = settings.peakSearch();
         FosterLeastSquares.Model model = new FosterLeastSquares.Model() {
             @Override

@@ -86,7 +86,8 @@ public record SemiInfiniteDie(double areaM2, double conductivityWPerMK, double d
     /**
      * A Foster network that follows this die over a stated time range and settles at a stated steady-state
      * resistance. The target is {@code min(Zth_die(t), R_ss)} sampled at 10 points per decade over
-     * {@code [fromS, toS]}, fitted by {@link ZthFit}'s method. The √t law crosses {@code R_ss} at
+     * {@code [fromS, toS]}, fitted by {@link ZthFit}'s method with the start's time constants spread from
+     * {@code fromS} to the cap's corner {@code t_c}. The √t law crosses {@code R_ss} at
      * {@code t_c = π·(A·√(kρc)·R_ss/2)²}; choose {@code toS} a decade or more beyond it so the fit sees the
      * plateau. The corner of the {@code min} is not physical (the package takes over gradually): the result is
      * an estimate (basis {@link FosterFitOutcome.Basis#SEMI_INFINITE_DIE_ESTIMATE}) and its RMS log residual says
@@ -114,7 +115,9 @@ public record SemiInfiniteDie(double areaM2, double conductivityWPerMK, double d
         for (int j = 0; j < count; j++) {
             z[j] = Math.min(zthKPerW(t[j]), steadyStateKPerW);
         }
-        return ZthFit.fit(t, z, stages, settings, FosterFitOutcome.Basis.SEMI_INFINITE_DIE_ESTIMATE);
+        // start time constants where the target still rises: beyond the cap's corner a stage only adds to the plateau
+        return ZthFit.fit(t, z, stages, settings, FosterFitOutcome.Basis.SEMI_INFINITE_DIE_ESTIMATE, fromS,
+                Math.min(toS, Math.max(capTimeS(steadyStateKPerW), fromS * 10)));
     }
 
     /** @return the time (s) at which the √t law reaches {@code steadyStateKPerW} */
