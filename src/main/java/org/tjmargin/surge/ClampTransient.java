@@ -18,8 +18,9 @@ import org.tjmargin.thermal.FosterStep;
  * <p>Grid: the waveform's breakpoints and the ends of its fronts are grid points; every front gets at least
  * {@code pointsPerFront} steps; no step exceeds the waveform's duration over {@code pointsPerFront}. Elsewhere the
  * step adapts: a step is accepted when, at its midpoint, the power and the current differ from their chords by
- * at most {@code relativeTolerance} of the step's largest value (values under 1e-6 of the running peak do not
- * count). The chord error of a smooth function is {@code h²·f''/8}, so the next step is scaled by
+ * at most {@code relativeTolerance} of the step's largest value, or of 1e-4 of the peak where the values are
+ * smaller (the peak is estimated before stepping from the source at every grid point, at the start temperature,
+ * and updated as the solve runs). The chord error of a smooth function is {@code h²·f''/8}, so the next step is scaled by
  * {@code 0.9/√(error/tolerance)}, at most {@code maxStepGrowth} (common practice in step-size control, e.g.
  * Hairer, Nørsett and Wanner, <i>Solving Ordinary Differential Equations I</i>, §II.4, adapted here to a
  * second-order interpolation error; no single source). Where the source jumps (at a breakpoint) the step before it
@@ -34,8 +35,13 @@ import org.tjmargin.thermal.FosterStep;
  */
 public final class ClampTransient {
 
-    /** Values below this fraction of the running peak are not error-controlled (they are below any use). */
-    private static final double NEGLIGIBLE_FRACTION_OF_PEAK = 1e-6;
+    /**
+     * Below this fraction of the peak, values are error-controlled absolutely (to the tolerance times this
+     * fraction of the peak) rather than relative to themselves: a power law from zero ({@code t³} of the 8/20
+     * current) or the kink where conduction starts has a chord error that is a fixed fraction of the local value
+     * however short the step, so a purely relative control could never accept it.
+     */
+    private static final double ABSOLUTE_FLOOR_FRACTION_OF_PEAK = 1e-4;
     /** The smallest step, as a fraction of the waveform's duration: far below any physical time scale. */
     private static final double MIN_STEP_FRACTION = 1e-12;
     /** A step this close (relative) to the next grid point lands on it rather than leave a sliver. */
@@ -111,6 +117,9 @@ public final class ClampTransient {
         private double peakI;
         private double peakV = Double.NEGATIVE_INFINITY;
         private double peakP;
+        /** Peaks estimated before stepping, for the error control's absolute floor. */
+        private double referenceI;
+        private double referenceP;
         private double peakTj = Double.NEGATIVE_INFINITY;
         private double peakTjTime;
 
@@ -164,8 +173,15 @@ public final class ClampTransient {
             double hMin = MIN_STEP_FRACTION * duration;
             double tol = settings.relativeTolerance();
 
-            double t = 0;
             double tj = startTjK + sum(x);
+            for (double g : grid) {
+                for (double tg : new double[] {g, Math.max(0, Math.nextDown(g))}) {
+                    operate(waveform.valueAt(tg), tj);
+                    referenceI = Math.max(referenceI, opI);
+                    referenceP = Math.max(referenceP, Math.abs(opP));
+                }
+            }
+            double t = 0;
             operate(waveform.valueAt(0), tj);
             double i0 = opI;
             double v0 = opV;
@@ -229,7 +245,8 @@ public final class ClampTransient {
                     double p1 = opP;
 
                     operate(waveform.valueAt(t + 0.5 * hh), 0.5 * (tj + tjIt));
-                    double err = Math.max(chordError(opP, p0, p1, peakP), chordError(opI, i0, i1, peakI)) / tol;
+                    double err = Math.max(chordError(opP, p0, p1, Math.max(peakP, referenceP)),
+                            chordError(opI, i0, i1, Math.max(peakI, referenceI))) / tol;
                     if (err > 1) {
                         if (hh <= hMin) {
                             return stopped(ClampTransientOutcome.Reason.STEP_TOO_SMALL, t, hh, tjIt, 0);
@@ -272,7 +289,7 @@ public final class ClampTransient {
         }
 
         private double chordError(double mid, double a, double b, double peak) {
-            double scale = Math.max(Math.max(Math.abs(a), Math.abs(b)), Math.max(Math.abs(mid), NEGLIGIBLE_FRACTION_OF_PEAK * peak));
+            double scale = Math.max(Math.max(Math.abs(a), Math.abs(b)), Math.max(Math.abs(mid), ABSOLUTE_FLOOR_FRACTION_OF_PEAK * peak));
             return scale > 0 ? Math.abs(mid - 0.5 * (a + b)) / scale : 0;
         }
 

@@ -7,7 +7,7 @@ package org.tjmargin.surge;
  *                              the waveform's duration over this number), at least 2
  * @param relativeTolerance     local tolerance of the piecewise-linear power and current: at each step's midpoint
  *                              the true value may differ from the chord by this fraction of the step's largest
- *                              value (values below 1e-6 of the running peak do not count)
+ *                              value, or of 1e-4 of the peak for smaller values
  * @param maxSteps              accepted-step budget
  * @param maxCouplingIterations fixed-point iterations allowed per step for the junction temperature
  * @param couplingToleranceK    the fixed point's stop: change of the junction temperature between iterations (K)
