@@ -128,7 +128,7 @@ public record FosterNetwork(List<FosterStage> stages) implements TransientTherma
      */
     public FosterState stateAfter(FosterPowerProfile profile, FosterState start) {
         double[] x = checkedRise(start);
-        advanceFrom(profile, x, 0, profile.endS());
+        advanceThrough(profile, x);
         return new FosterState(x);
     }
 
@@ -218,7 +218,7 @@ public record FosterNetwork(List<FosterStage> stages) implements TransientTherma
     public FosterState endOfPeriodFromRest(FosterPowerProfile profile, double periodS) {
         checkPeriod(profile, periodS);
         double[] x = new double[stages.size()];
-        advanceFrom(profile, x, 0, profile.endS());
+        advanceThrough(profile, x);
         double rest = periodS - profile.endS();
         if (rest > 0) {
             step(rest).advanceInPlace(x, 0, 0);
@@ -299,8 +299,8 @@ public record FosterNetwork(List<FosterStage> stages) implements TransientTherma
         return powerW * rise;
     }
 
-    private void advanceFrom(FosterPowerProfile profile, double[] x, int fromSample, double untilS) {
-        for (int k = fromSample + 1; k < profile.size() && profile.timeS(k) <= untilS; k++) {
+    private void advanceThrough(FosterPowerProfile profile, double[] x) {
+        for (int k = 1; k < profile.size(); k++) {
             double h = profile.timeS(k) - profile.timeS(k - 1);
             if (h > 0) {
                 step(h).advanceInPlace(x, profile.powerW(k - 1), profile.powerW(k));

@@ -105,6 +105,17 @@ class ClampTransientTest {
     }
 
     @Test
+    void powerProfileCarriesTheSameEnergyToTheThermalAlgebra() {
+        // the profile is the series' power, so its trapezoid is the result's energy and the network's response to
+        // it is the transient's own final state (both exact for the piecewise-linear power)
+        ClampTransientResult r = solve(CombinationWaveGenerator.of(1000, CombinationWaveGenerator.Coupling.POWER_LINE_TO_EARTH).source(),
+                new LinearClampLine(40, 0.04, 0.1));
+        assertEquals(r.energyJ(), r.powerProfile().energyJ(), 1e-12 * r.energyJ());
+        double viaProfile = NETWORK.stateAfter(r.powerProfile(), NETWORK.rest()).totalRiseK();
+        assertEquals(r.finalRise().totalRiseK(), viaProfile, 1e-9 * viaProfile);
+    }
+
+    @Test
     void everyFrontGetsAtLeastTheRequestedPoints() {
         DoubleExponentialPulse p = DoubleExponentialPulse.current10x1000(10);
         for (int n : new int[] {50, 200}) {

@@ -46,10 +46,10 @@ class SurgeTrainTest {
     void withCouplingTheBoundIsConservativeAndClose() {
         // Thevenin source, αV > 0, clamp voltage below the source-resistance drop: warmer pulses dissipate more
         // (dP/dTj = αV(R·I − V)/(R + Rd) > 0), so the bound built from the last pulse's heat lies above the truth
-        // (invented case: 500 V level-1 surges line to earth every 50 ms into a 60 V clamp, +0.1 %/K)
+        // (invented case: 500 V level-1 surges line to earth every 10 ms into a 60 V clamp, +0.1 %/K)
         SurgeSource source = CombinationWaveGenerator.of(500, CombinationWaveGenerator.Coupling.POWER_LINE_TO_EARTH).source();
         ClampLine clamp = new LinearClampLine(60, 0.06, 0.1);
-        double period = 50e-3;
+        double period = 10e-3;
         SurgeTrainResult train = SurgeTrain.analyse(source, clamp, NETWORK, 298.15, period, 30, SETTINGS);
         Stepped reference = stepped(source, clamp, period, 30);
         assertTrue(train.buildUpConverged());
