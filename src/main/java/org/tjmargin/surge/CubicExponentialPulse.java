@@ -84,12 +84,12 @@ public record CubicExponentialPulse(double peak, double tauS, SurgeQuantity quan
         return u * tauS;
     }
 
-    /** @return {@code ∫ v dt = 6·A·τ⁴·peak} over all time (A·s or V·s) */
+    /** @return {@code ∫ v dt = 6·A·τ⁴·peak} over all time (A·s or V·s; Γ(4) = 6, derived) */
     public double integral() {
         return 6 * coefficientPerS3() * Math.pow(tauS, 4) * peak;
     }
 
-    /** @return {@code ∫ v² dt = 720·A²·(τ/2)⁷·peak²} over all time (A²·s or V²·s) */
+    /** @return {@code ∫ v² dt = 720·A²·(τ/2)⁷·peak²} over all time (A²·s or V²·s; Γ(7) = 720, derived) */
     public double integralOfSquare() {
         double a = coefficientPerS3();
         return 720 * a * a * Math.pow(tauS / 2, 7) * peak * peak;

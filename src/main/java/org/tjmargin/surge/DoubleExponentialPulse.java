@@ -121,12 +121,12 @@ public record DoubleExponentialPulse(double amplitude, double tau1S, double tau2
         return Math.max(2 * peakTimeS(), tau1S * Math.log(amplitude / (NEGLIGIBLE_TAIL_FRACTION * peakValue())));
     }
 
-    /** @return the integral {@code ∫ v dt = a·(τ1 − τ2)} over all time (A·s or V·s) */
+    /** @return the integral {@code ∫ v dt = a·(τ1 − τ2)} over all time (A·s or V·s; derived) */
     public double integral() {
         return amplitude * (tau1S - tau2S);
     }
 
-    /** @return the integral of the square, {@code a²·(τ1/2 − 2τ1τ2/(τ1 + τ2) + τ2/2)} (A²·s or V²·s) */
+    /** @return the integral of the square, {@code a²·(τ1/2 − 2τ1τ2/(τ1 + τ2) + τ2/2)} (A²·s or V²·s; derived) */
     public double integralOfSquare() {
         return amplitude * amplitude * (tau1S / 2 - 2 * tau1S * tau2S / (tau1S + tau2S) + tau2S / 2);
     }

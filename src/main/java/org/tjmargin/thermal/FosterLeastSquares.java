@@ -59,22 +59,12 @@ final class FosterLeastSquares {
     static FosterFitOutcome fit(Model model, double[] startR, double[] startTau, double tauMinS, double tauMaxS,
             FosterFitSettings settings, FosterFitOutcome.Basis basis) {
         Tracker tracker = new Tracker(startR.length);
-        Pass first;
         try {
-            first = optimise(model, startR, startTau, false, tauMinS, tauMaxS, settings, tracker);
-        } catch (TooManyEvaluationsException | TooManyIterationsException e) {
-            return tracker.failure(basis, FosterFitOutcome.Reason.BUDGET_EXHAUSTED, e.getMessage());
-        } catch (ConvergenceException e) {
-            return tracker.failure(basis, FosterFitOutcome.Reason.NOT_CONVERGED, e.getMessage());
-        } catch (PeakSearchFailure e) {
-            return tracker.failure(basis, FosterFitOutcome.Reason.PEAK_SEARCH_NOT_CONVERGED, e.getMessage());
-        }
-        Pass best = first;
-        try {
+            Pass first = optimise(model, startR, startTau, false, tauMinS, tauMaxS, settings, tracker);
             Pass second = optimise(model, first.r, first.tau, true, tauMinS, tauMaxS, settings, tracker);
-            if (second.rms <= first.rms) {
-                best = second;
-            }
+            Pass best = second.rms <= first.rms ? second : first;
+            return new FosterFitOutcome.Fitted(FosterNetwork.of(best.r, best.tau).sortedByTimeConstant(), basis, best.rms,
+                    best.maxAbs, tracker.iterations, tracker.evaluations);
         } catch (TooManyEvaluationsException | TooManyIterationsException e) {
             return tracker.failure(basis, FosterFitOutcome.Reason.BUDGET_EXHAUSTED, e.getMessage());
         } catch (ConvergenceException e) {
@@ -82,8 +72,6 @@ final class FosterLeastSquares {
         } catch (PeakSearchFailure e) {
             return tracker.failure(basis, FosterFitOutcome.Reason.PEAK_SEARCH_NOT_CONVERGED, e.getMessage());
         }
-        return new FosterFitOutcome.Fitted(FosterNetwork.of(best.r, best.tau).sortedByTimeConstant(), basis, best.rms,
-                best.maxAbs, tracker.iterations, tracker.evaluations);
     }
 
     /** The end of one optimizer pass. */

@@ -99,6 +99,9 @@ class FosterNetworkTest {
         for (int i = 0; i < 3; i++) {
             assertEquals(periodic.stageRiseK(i), x.stageRiseK(i), 1e-8 * periodic.totalRiseK());
         }
+        double[] rises = NETWORK.riseAtSamplesK(triangle, periodic);
+        assertEquals(NETWORK.stateAfter(triangle, periodic).totalRiseK(), rises[rises.length - 1], 1e-12 * rises[0]);
+        assertEquals(periodic.totalRiseK(), rises[0], 0);
         FosterState after9 = NETWORK.trainStartState(NETWORK.endOfPeriodFromRest(triangle, period), period, 9);
         FosterState stepped = NETWORK.rest();
         for (int k = 0; k < 9; k++) {
