@@ -56,14 +56,7 @@ final class BreakdownReader {
         }
         Fields f = of.get();
         Optional<Value> vz = f.quantity("vz", Need.REQUIRED, Sign.POSITIVE, Dimension.VOLTAGE);
-        Optional<Value> tol = f.quantity("tolerance", Need.REQUIRED, Sign.NON_NEGATIVE, Dimension.FRACTION)
-                .filter(t -> {
-                    if (t.si() < 1) {
-                        return true;
-                    }
-                    f.report(InputProblem.Kind.NOT_PHYSICAL, t, "a tolerance must be below 100 %, got " + t.text());
-                    return false;
-                });
+        Optional<Value> tol = f.tolerance("tolerance", Need.REQUIRED);
         Optional<Value> izt = f.quantity("test-current", Need.REQUIRED, Sign.POSITIVE, Dimension.CURRENT);
         Optional<Value> zzt = f.quantity("impedance", Need.REQUIRED, Sign.POSITIVE, Dimension.RESISTANCE);
         Optional<Value> izk = f.quantity("knee-current", Need.REQUIRED, Sign.POSITIVE, Dimension.CURRENT)

@@ -99,6 +99,17 @@ final class Fields {
         return get(key, need).flatMap(n -> Scalars.quantity(ctx, n, pathOf(key), sign, allowed));
     }
 
+    /** A tolerance: a fraction from 0 (inclusive) to 1 (exclusive), e.g. {@code 5 %}. */
+    Optional<Value> tolerance(String key, Need need) {
+        return quantity(key, need, Sign.NON_NEGATIVE, Dimension.FRACTION).filter(t -> {
+            if (t.si() < 1) {
+                return true;
+            }
+            report(InputProblem.Kind.NOT_PHYSICAL, t, "a tolerance must be below 100 %, got " + t.text());
+            return false;
+        });
+    }
+
     /** A name or identifier. */
     Optional<String> text(String key, Need need) {
         return get(key, need).flatMap(n -> Scalars.text(ctx, n, pathOf(key)));
