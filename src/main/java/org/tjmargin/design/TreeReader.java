@@ -63,7 +63,7 @@ final class TreeReader {
         } catch (JsonProcessingException e) {
             JsonLocation l = e.getLocation();
             ctx.report(InputProblem.Kind.SYNTAX, l == null ? 0 : line(l), l == null ? 0 : column(l), "",
-                    firstLine(e.getOriginalMessage()));
+                    syntaxMessage(e.getOriginalMessage()));
             return Optional.empty();
         } catch (IOException e) {
             ctx.report(InputProblem.Kind.SYNTAX, 0, 0, "", "cannot parse the file: " + e.getMessage());
@@ -136,13 +136,24 @@ final class TreeReader {
         return Math.max(0, l.getColumnNr());
     }
 
-    /** SnakeYAML's messages quote the offending line below a first line that says it all. */
-    private static String firstLine(String message) {
+    /**
+     * The message without SnakeYAML's quoted snippets: its unindented lines ("while parsing a flow mapping",
+     * "expected ',' or '}', but got ':'") joined; the location is reported separately.
+     */
+    private static String syntaxMessage(String message) {
         if (message == null || message.isBlank()) {
             return "syntax error";
         }
-        String m = message.strip();
-        int nl = m.indexOf('\n');
-        return nl < 0 ? m : m.substring(0, nl).strip();
+        StringBuilder sb = new StringBuilder();
+        for (String l : message.split("\\R")) {
+            if (l.isBlank() || Character.isWhitespace(l.charAt(0))) {
+                continue;
+            }
+            if (sb.length() > 0) {
+                sb.append("; ");
+            }
+            sb.append(l.strip());
+        }
+        return sb.length() == 0 ? message.strip() : sb.toString();
     }
 }
