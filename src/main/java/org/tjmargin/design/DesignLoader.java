@@ -30,7 +30,7 @@ public final class DesignLoader {
         Optional<SourceFile> src = SourceFile.read(designFile, problems, Optional.empty());
         problems.throwIfAny();
         SourceFile design = src.orElseThrow();
-        FileContext ctx = new FileContext(design.name(), problems);
+        FileContext ctx = problems.contextFor(design.name());
         Optional<Fields> top = TreeReader.read(design, ctx)
                 .flatMap(root -> Fields.of(ctx, root, "", DesignReader.KEYS));
         problems.throwIfAny();
@@ -74,7 +74,7 @@ public final class DesignLoader {
     }
 
     private static Optional<PartsReader.Result> readLibrary(SourceFile file, Problems problems) {
-        FileContext ctx = new FileContext(file.name(), problems);
+        FileContext ctx = problems.contextFor(file.name());
         return TreeReader.read(file, ctx).map(root -> PartsReader.read(ctx, root));
     }
 

@@ -13,6 +13,13 @@ import java.util.Map;
 final class Problems {
 
     private final List<InputProblem> list = new ArrayList<>();
+    private final Map<String, Integer> fileOrder = new LinkedHashMap<>();
+
+    /** The context of a file about to be mapped; files are reported in the order their contexts were made. */
+    FileContext contextFor(String fileName) {
+        fileOrder.putIfAbsent(fileName, fileOrder.size());
+        return new FileContext(fileName, this);
+    }
 
     void add(InputProblem p) {
         list.add(p);
@@ -22,12 +29,11 @@ final class Problems {
         return list.isEmpty();
     }
 
-    /** Throws the collected problems, if any: files in the order they were first reported, then line, column. */
+    /** Throws the collected problems, if any: files in the order they were read, then by line and column. */
     void throwIfAny() {
         if (list.isEmpty()) {
             return;
         }
-        Map<String, Integer> fileOrder = new LinkedHashMap<>();
         for (InputProblem p : list) {
             fileOrder.putIfAbsent(p.file(), fileOrder.size());
         }
