@@ -11,9 +11,26 @@ import java.util.Objects;
  * {@code "6.2 V"}, {@code "41mA"}, {@code "-40 °C"}, {@code "1.5E3 W"}. The number has an
  * optional sign (+, - or −), digits with an optional decimal point, and an optional exponent;
  * a decimal comma is rejected. Only a {@link Dimension#FRACTION} may be a plain number. Units are
- * case-sensitive SI symbols with an optional SI prefix ({@link SiPrefix}); the accepted spellings
- * of each dimension are listed on {@link Dimension}'s constants and in the project notes. The
- * result is the double nearest to the exact decimal value of the text in SI units.
+ * case-sensitive SI symbols with an optional SI prefix ({@link SiPrefix}). The result is the
+ * double nearest to the exact decimal value of the text in SI units.
+ *
+ * <p>Accepted units ("p" marks where an SI prefix may stand; °C may be written degC or ℃
+ * everywhere; a product may be written with ·, ⋅, * or a space; a square as ², ^2, or 2 after m;
+ * Ω may be Ω (U+2126), ohm, ohms, Ohm or Ohms):
+ * <ul>
+ *   <li>VOLTAGE pV, CURRENT pA, RESISTANCE pΩ, POWER pW, ENERGY pJ, TIME ps, FREQUENCY pHz;</li>
+ *   <li>LENGTH pm, AREA pm² (centi allowed on both; the prefix is squared: 1 mm² = 1e-6 m²);</li>
+ *   <li>TEMPERATURE K or °C, no prefix; TEMPERATURE_DIFFERENCE pK or °C (no prefix on °C);</li>
+ *   <li>THERMAL_RESISTANCE K/W, °C/W;</li>
+ *   <li>THERMAL_CONDUCTIVITY pW/(m·K), pW/m/K, pW/mK (and with °C);</li>
+ *   <li>HEAT_TRANSFER_COEFFICIENT pW/(m²·K), pW/m²/K, pW/m²K (and with °C);</li>
+ *   <li>VOLTAGE_TEMPERATURE_COEFFICIENT pV/K, POWER_DERATING_SLOPE pW/K, HEAT_CAPACITY pJ/K
+ *       (and with °C);</li>
+ *   <li>RELATIVE_TEMPERATURE_COEFFICIENT %/K, ppm/K, 1/K, K⁻¹, K^-1 (and with °C);</li>
+ *   <li>FRACTION: a plain number, %, ppm;</li>
+ *   <li>CHARGE pC, pA·s; ACTION_INTEGRAL A²s, A²·s (no prefix).</li>
+ * </ul>
+ * A product after a solidus without parentheses ({@code W/m·K}) is rejected as ambiguous.
  *
  * <h2>Formatting</h2>
  * Values are shown with a chosen number of significant digits, by default
@@ -29,7 +46,7 @@ public final class Quantities {
 
     /**
      * The kelvin value of 0 °C: t/°C = T/K − 273.15 (BIPM, The International System of Units,
-     * 9th edition 2019, section 2.3.1, definition of the degree Celsius).
+     * 9th edition 2019, definition of the degree Celsius; section 2.3.1 from memory, verify).
      */
     public static final double ZERO_CELSIUS_K = 273.15;
 

@@ -16,6 +16,8 @@ public record Quantity(double valueSi, Dimension dimension) {
     /**
      * Checks and normalises the components.
      *
+     * @param valueSi the value in the SI unit of the dimension; finite
+     * @param dimension what the value measures; not null
      * @throws NullPointerException if the dimension is null
      * @throws IllegalArgumentException if the value is NaN or infinite, or is an absolute
      *     temperature below 0 K

@@ -40,10 +40,15 @@ public final class QuantityException extends RuntimeException {
         BELOW_ABSOLUTE_ZERO
     }
 
+    /** What was wrong. */
     private final Kind kind;
+    /** The rejected text, as given. */
     private final String text;
+    /** The unit as written, or null when none was reached. */
     private final String unit;
+    /** The accepted dimensions, in the order given (an array, so that it serialises). */
     private final Dimension[] expected;
+    /** The dimension of the unit, for a wrong dimension; otherwise null. */
     private final Dimension actual;
 
     QuantityException(Kind kind, String text, String unit, List<Dimension> expected,

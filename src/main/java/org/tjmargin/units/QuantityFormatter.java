@@ -120,8 +120,13 @@ final class QuantityFormatter {
         BigDecimal k = new BigDecimal(kelvin);
         int integerDigits = k.signum() == 0 ? 1 : Math.max(1, leadingExponent(k) + 1);
         int decimals = n - integerDigits;
-        BigDecimal c = k.subtract(QuantityParser.ZERO_CELSIUS).setScale(decimals,
-                RoundingMode.HALF_UP);
+        BigDecimal exact = k.subtract(QuantityParser.ZERO_CELSIUS);
+        BigDecimal c = exact.setScale(decimals, RoundingMode.HALF_UP);
+        if (c.compareTo(QuantityParser.ZERO_CELSIUS.negate()) < 0) {
+            // 0 K with one decimal is a tie that half-up would show as -273.2 °C, below absolute
+            // zero; the step above (-273.1 °C) is as near and reads back
+            c = exact.setScale(decimals, RoundingMode.CEILING);
+        }
         if (c.abs().compareTo(PLAIN_HIGH) >= 0) {
             return scientific(c);
         }

@@ -58,7 +58,9 @@ final class Rejections {
         if (actual == Dimension.TEMPERATURE_DIFFERENCE && prefixed
                 && expected.contains(Dimension.TEMPERATURE)) {
             hint = " (no prefix is read on an absolute temperature)";
-        } else if (actual == Dimension.CHARGE && unit.equals("C")) {
+        } else if (actual == Dimension.CHARGE && unit.equals("C")
+                && (expected.contains(Dimension.TEMPERATURE)
+                        || expected.contains(Dimension.TEMPERATURE_DIFFERENCE))) {
             hint = " (C is the coulomb; degrees Celsius are written \u00B0C or degC)";
         }
         return new QuantityException(Kind.WRONG_DIMENSION, text, unit, expected, actual,
