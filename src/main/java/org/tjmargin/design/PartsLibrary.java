@@ -1,5 +1,6 @@
 package org.tjmargin.design;
 
+import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
@@ -13,8 +14,8 @@ import java.util.Optional;
 public record PartsLibrary(Map<String, LibraryPart> parts, Map<String, ResistorPart> resistors) {
 
     public PartsLibrary {
-        parts = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(parts));
-        resistors = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(resistors));
+        parts = Collections.unmodifiableMap(new LinkedHashMap<>(parts));
+        resistors = Collections.unmodifiableMap(new LinkedHashMap<>(resistors));
     }
 
     /** The diode with this id. */

@@ -69,7 +69,8 @@ class BadInputTest {
                         "positions[0].mounting.copper-area"),
                 Arguments.of("missing-mounting.yaml", Kind.MISSING_FIELD, 7, 5, "positions[0].mounting"),
                 Arguments.of("unknown-file-type.txt", Kind.SYNTAX, 0, 0, ""),
-                Arguments.of("json-syntax.json", Kind.SYNTAX, 4, 3, ""));
+                Arguments.of("json-syntax.json", Kind.SYNTAX, 4, 3, ""),
+                Arguments.of("unknown-key.json", Kind.UNKNOWN_KEY, 8, 53, "positions[0].circuit.current-fed.ripple"));
     }
 
     @ParameterizedTest(name = "{0}")

@@ -107,6 +107,20 @@ class MappingTest {
     }
 
     @Test
+    void equilibriumWithAGivenResistanceAndPulseAtAnotherTemperature() throws IOException {
+        String given = "    ratings: {tj-max: 150 °C, power: 0.5 W, derating: {reference: ambient, knee: 25 °C}}\n"
+                + "    package: {given: {rtheta-ja: 300 K/W}}\n";
+        BreakdownPart eq = onlyPart(part("a", given).replace("knee-current: 1 mA}", "knee-current: 1 mA,"
+                + " temperature-coefficient: 5 mV/K, measured: {at: equilibrium, held-temperature: 25 °C,"
+                + " held-rtheta: 200 K/W}}"));
+        // Tj_test = 25 °C + Vz·Izt·Rθ = 25 °C + 10 V · 20 mA · 200 K/W = 65 °C.
+        assertEquals(10 - 5 * 0.02 - 5e-3 * 40, eq.model().vz0At25V(), 1e-12);
+        BreakdownPart pulse = onlyPart(part("a", given).replace("knee-current: 1 mA}", "knee-current: 1 mA,"
+                + " temperature-coefficient: 5 mV/K, measured: {at: pulse, junction-temperature: 35 °C}}"));
+        assertEquals(10 - 5 * 0.02 - 5e-3 * 10, pulse.model().vz0At25V(), 1e-12);
+    }
+
+    @Test
     void ratingPointsAreKeptAsGiven() throws IOException {
         BreakdownPart p = onlyPart(part("a", AXIAL_LEAD.replace("{reference: lead, reference-distance: 10 mm, knee: 25 °C}",
                 "{reference: lead, reference-distance: 10 mm, points: [{temperature: 25 °C, power: 1 W},"
