@@ -33,7 +33,10 @@ public final class DesignLoader {
         FileContext ctx = problems.contextFor(design.name());
         Optional<Fields> top = TreeReader.read(design, ctx)
                 .flatMap(root -> Fields.of(ctx, root, "", DesignReader.KEYS));
-        problems.throwIfAny();
+        if (top.isEmpty()) {
+            // Unparsable, or not an object at its top: nothing more can be read.
+            problems.throwIfAny();
+        }
         Fields f = top.orElseThrow();
         List<InputFile> inputs = new ArrayList<>();
         inputs.add(design.toInputFile());

@@ -219,12 +219,13 @@ class MappingTest {
         String pos = "  - {id: D1, part: a, mounting: {lead-length: 5 mm, tie-point: 20 K/W},"
                 + " circuit: {current-fed: {current: -5 mA}}}\n"
                 + "  - {id: D2, part: nowhere, circuit: {current-fed: {current: 5 mA}}}\n";
-        InputException e = assertThrows(InputException.class, () -> design(lib, pos, ""));
+        InputException e = assertThrows(InputException.class, () -> design(lib, pos, "colour: red\n"));
         // The design's problems first (it was read first), then the library's; a reference to a declared part that
         // failed its own checks is not reported again.
-        assertEquals(List.of(InputProblem.Kind.NOT_PHYSICAL, InputProblem.Kind.UNKNOWN_REFERENCE,
-                InputProblem.Kind.NOT_PHYSICAL), e.problems().stream().map(InputProblem::kind).toList());
+        assertEquals(List.of(InputProblem.Kind.UNKNOWN_KEY, InputProblem.Kind.NOT_PHYSICAL,
+                InputProblem.Kind.UNKNOWN_REFERENCE, InputProblem.Kind.NOT_PHYSICAL),
+                e.problems().stream().map(InputProblem::kind).toList());
         assertTrue(e.problems().get(0).file().endsWith("design.yaml"));
-        assertTrue(e.problems().get(2).file().endsWith("parts.yaml"));
+        assertTrue(e.problems().get(3).file().endsWith("parts.yaml"));
     }
 }
