@@ -1,0 +1,74 @@
+package org.tjmargin.design;
+
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+import org.tjmargin.solve.AmbientRange;
+import org.tjmargin.solve.Board;
+import org.tjmargin.solve.PositionSpec;
+import org.tjmargin.thermal.Enclosure;
+
+/**
+ * Maps the top level of a design file, once its parts library has been read, into a {@link Board}.
+ */
+final class DesignReader {
+
+    /** Keys of a design file's top level. */
+    static final Set<String> KEYS = Set.of("design", "parts", "policy", "ambient", "enclosure", "positions");
+
+    private DesignReader() {
+    }
+
+    /**
+     * Maps the design.
+     *
+     * @param top  the design file's top-level object
+     * @param refs the parts library's references
+     * @return the board, or empty when any problem was reported
+     */
+    static Optional<Board> read(Fields top, PartReferences refs) {
+        Optional<String> name = top.text("design", Need.REQUIRED);
+        Optional<AmbientRange> ambient = AmbientReader.ambient(top);
+        Optional<Enclosure> enclosure = AmbientReader.enclosure(top);
+        Optional<List<PositionSpec>> positions = positions(top, refs);
+        if (!Fields.present(name, ambient, enclosure, positions)) {
+            return Optional.empty();
+        }
+        return top.build(() -> new Board(name.get(), positions.get(), enclosure.get(), ambient.get()));
+    }
+
+    private static Optional<List<PositionSpec>> positions(Fields top, PartReferences refs) {
+        Optional<Node.Sequence> seq = top.list("positions", Need.REQUIRED);
+        if (seq.isEmpty()) {
+            return Optional.empty();
+        }
+        if (seq.get().items().isEmpty()) {
+            top.report(InputProblem.Kind.MISSING_FIELD, "positions", "a design needs at least one position");
+            return Optional.empty();
+        }
+        List<PositionSpec> out = new ArrayList<>();
+        Set<String> ids = new LinkedHashSet<>();
+        boolean ok = true;
+        List<Node> items = seq.get().items();
+        for (int i = 0; i < items.size(); i++) {
+            String path = top.pathOf("positions") + "[" + i + "]";
+            Node item = items.get(i);
+            if (item instanceof Node.Mapping m && m.entry("id").isPresent()
+                    && m.entry("id").get().value() instanceof Node.Scalar s && !s.text().isBlank()
+                    && !ids.add(s.text().strip())) {
+                top.ctx().report(InputProblem.Kind.DUPLICATE_ID, s, path + ".id", "position id '" + s.text().strip()
+                        + "' is already used by an earlier position");
+                ok = false;
+            }
+            Optional<PositionSpec> p = PositionReader.read(top.ctx(), item, path, refs);
+            if (p.isPresent()) {
+                out.add(p.get());
+            } else {
+                ok = false;
+            }
+        }
+        return ok ? Optional.of(out) : Optional.empty();
+    }
+}
