@@ -20,6 +20,12 @@ public record CurrentFedDiode(double currentA) implements Circuit {
         // The total reverse current rises monotonically with voltage: bisection for the voltage that carries the
         // feed current, between 0 and the voltage the breakdown branch alone would need (200 halvings reach
         // double resolution).
+        if (diode.excessLeakageConductanceS(tjK) == 0 && currentA >= diode.izkA()) {
+            // The usual case, on the breakdown characteristic itself: closed form or the knee law, no search.
+            double v = diode.breakdownVoltageV(currentA, tjK);
+            Region region = currentA >= diode.lineStartA() ? Region.BREAKDOWN : Region.KNEE;
+            return new CircuitPoint(v, currentA, v * currentA, 0.0, 0.0, region);
+        }
         double lo = 0;
         double hi = Math.max(diode.breakdownVoltageV(Math.max(currentA, diode.izkA()), tjK), 1e-9);
         if (diode.reverseCurrentA(hi, tjK) < currentA) {

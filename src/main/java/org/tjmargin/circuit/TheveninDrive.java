@@ -15,6 +15,8 @@ final class TheveninDrive {
 
     /** Bisection budget: the bracket shrinks by 2^-200, far below double resolution before the budget ends. */
     private static final int MAX_HALVINGS = 200;
+    /** Fixed-point tries below the knee before falling back to bisection. */
+    private static final int FIXED_POINT_TRIES = 12;
 
     private TheveninDrive() {
     }
@@ -75,8 +77,21 @@ final class TheveninDrive {
             return new double[] {0.0, 0.0, Region.BELOW_KNEE.ordinal()};
         }
         // Below the knee: (Vth − V)/Rth − I_sub(V) = 0 for V in [0, min(Vth, Vzk)], decreasing in V.
-        double lo = 0;
         double hi = Math.min(vthV, d.kneeVoltageV(tjK));
+        // Blocking clamps and collapsed regulators draw little current, so V = Vth − Rth·I_sub(V) contracts fast
+        // (its derivative Rth·dI/dV is tiny): try it first, fall back to bisection if it does not settle.
+        double v = hi;
+        for (int i = 0; i < FIXED_POINT_TRIES; i++) {
+            double next = vthV - rthOhm * d.subKneeCurrentA(v, tjK);
+            if (!(next >= 0 && next <= hi)) {
+                break;
+            }
+            if (Math.abs(next - v) <= 1e-15 * hi) {
+                return new double[] {next, d.subKneeCurrentA(next, tjK), Region.BELOW_KNEE.ordinal()};
+            }
+            v = next;
+        }
+        double lo = 0;
         for (int i = 0; i < MAX_HALVINGS && hi - lo > 1e-15 * hi; i++) {
             double mid = 0.5 * (lo + hi);
             if ((vthV - mid) / rthOhm - d.subKneeCurrentA(mid, tjK) >= 0) {
@@ -85,7 +100,7 @@ final class TheveninDrive {
                 hi = mid;
             }
         }
-        double v = 0.5 * (lo + hi);
+        v = 0.5 * (lo + hi);
         return new double[] {v, d.subKneeCurrentA(v, tjK), Region.BELOW_KNEE.ordinal()};
     }
 }
