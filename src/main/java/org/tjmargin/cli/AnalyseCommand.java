@@ -11,6 +11,8 @@ import org.tjmargin.design.InputException;
 import org.tjmargin.design.InputFile;
 import org.tjmargin.design.InputProblem;
 import org.tjmargin.design.LoadedDesign;
+import org.tjmargin.design.LoadedPolicy;
+import org.tjmargin.design.ProfileLoader;
 import org.tjmargin.report.Cautions;
 import org.tjmargin.report.OutputFiles;
 import org.tjmargin.report.Provenance;
@@ -47,6 +49,16 @@ public final class AnalyseCommand implements Callable<Integer> {
     @Option(names = "--json", description = "print the results JSON on standard output instead of the table")
     boolean json;
 
+    @Option(names = "--policy", paramLabel = "NAME|FILE",
+            description = {"derating profile to apply, overriding the design's 'policy': the name of a shipped "
+                + "profile (see 'tjmargin profiles') or a profile file.",
+                "Default: the design's choice, else " + DEFAULT_POLICY + ". The built-in minimum (Tj below Tj max, "
+                    + "Zener current at or above Izk) always applies as well."})
+    String policyOption;
+
+    /** The profile applied when neither the command line nor the design names one. */
+    static final String DEFAULT_POLICY = "general-commercial";
+
     @Override
     public Integer call() {
         PrintWriter err = spec.commandLine().getErr();
@@ -55,24 +67,32 @@ public final class AnalyseCommand implements Callable<Integer> {
         try {
             loaded = DesignLoader.load(design);
         } catch (InputException e) {
-            for (InputProblem p : e.problems()) {
-                err.println(p.format());
-            }
-            err.println("tjmargin: " + e.problems().size() + " problem" + (e.problems().size() == 1 ? "" : "s")
-                    + " in the input; nothing written");
-            return ExitCodes.INVALID_INPUT;
+            return invalid(err, e);
         }
-        Policy policy = Policy.builtInMinimum();
+        LoadedPolicy loadedPolicy;
+        try {
+            if (policyOption != null) {
+                loadedPolicy = ProfileLoader.resolve(policyOption, null);
+            } else {
+                Path base = loaded.designFile().path().toAbsolutePath().getParent();
+                loadedPolicy = ProfileLoader.resolve(loaded.policy().orElse(DEFAULT_POLICY), base);
+            }
+        } catch (InputException e) {
+            return invalid(err, e);
+        }
+        Policy policy = loadedPolicy.policy().withBuiltInMinimum();
         AnalysisResult result = Analysis.run(loaded.board(), policy, SolverSettings.DEFAULT);
         List<String> cautions = Cautions.forResult(result);
-        Provenance provenance = new Provenance(VersionProvider.version(), loaded.inputs().stream()
+        List<InputFile> allInputs = new java.util.ArrayList<>(loaded.inputs());
+        allInputs.addAll(loadedPolicy.inputs());
+        Provenance provenance = new Provenance(VersionProvider.version(), allInputs.stream()
                 .map(f -> new Provenance.InputDigest(f.path().toString(), f.sha256())).toList());
         String resultsJson = ResultsJson.render(result, cautions, provenance);
         OutputFiles files = new OutputFiles()
                 .text("results.json", resultsJson)
                 .text("sweep.csv", SweepCsv.render(result));
         try {
-            List<Path> inputs = loaded.inputs().stream().map(InputFile::path).toList();
+            List<Path> inputs = allInputs.stream().map(InputFile::path).toList();
             Path clash = files.wouldOverwrite(out, inputs);
             if (clash != null) {
                 err.println(out + ": the output folder would overwrite the input file " + clash
@@ -92,5 +112,16 @@ public final class AnalyseCommand implements Callable<Integer> {
         }
         stdout.flush();
         return ExitCodes.of(result.verdict());
+    }
+
+    /** Prints every input problem, one per line, and returns the invalid-input status. */
+    static int invalid(PrintWriter err, InputException e) {
+        for (InputProblem p : e.problems()) {
+            err.println(p.format());
+        }
+        err.println("tjmargin: " + e.problems().size() + " problem" + (e.problems().size() == 1 ? "" : "s")
+                + " in the input; nothing written");
+        err.flush();
+        return ExitCodes.INVALID_INPUT;
     }
 }

@@ -9,7 +9,8 @@ import picocli.CommandLine.Command;
             + "enclosures.", "",
             "Exit status: 0 every position passes its policy; 1 a position violates it; 2 invalid input; "
                 + "3 the solver could not reach an answer it can stand behind."},
-        subcommands = {AnalyseCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {AnalyseCommand.class, ProfilesCommand.class, CheckProfileCommand.class,
+            CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
 
     @CommandLine.Spec
