@@ -76,7 +76,7 @@ class DemoDesignTest {
         PositionSpec d3 = b.positions().get(2);
         assertEquals(BreakdownPart.Kind.TVS, d3.part().kind());
         assertEquals(28.0, d3.part().standoffV());
-        assertEquals(new StandoffClampSpec(new Range(19.2, 24.0, 28.0), 0.5), d3.circuit());
+        assertEquals(new StandoffClampSpec(new Range(21.6, 24.0, 26.4), 0.5), d3.circuit());
         assertTrue(d3.part().model().leakage().isKnown());
         // Case-referenced curve: the pad's reference resistance is the part's Rθjc.
         assertEquals(20.0, d3.path().rThetaJrKPerW(), 1e-12);
