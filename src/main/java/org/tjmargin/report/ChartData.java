@@ -63,30 +63,52 @@ final class ChartData {
         return r;
     }
 
+    /** Where a vertical line's label sits along the line. */
+    enum LabelAt { TOP, MIDDLE, BOTTOM }
+
     /** A labelled horizontal reference line, its label above the line at the left end of the plot. */
     static ValueMarker level(double value, Paint paint, Stroke stroke, String label) {
-        ValueMarker m = marker(value, paint, stroke, label, true, false);
+        ValueMarker m = marker(value, paint, stroke, label);
         m.setLabelAnchor(RectangleAnchor.TOP_LEFT);
         m.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
         return m;
     }
 
-    /** A labelled vertical reference line; the label sits at the top (or bottom) of a vertical line, to its left or right. */
-    static ValueMarker marker(double value, Paint paint, Stroke stroke, String label, boolean top, boolean left) {
+    /**
+     * A labelled vertical reference line at {@code value} on an axis from {@code axisLo} to {@code axisHi}: the
+     * label goes on the side of the line with more room, so that a line near the right edge keeps its label inside
+     * the plot.
+     */
+    static ValueMarker vertical(double value, Paint paint, Stroke stroke, String label, LabelAt at, double axisLo,
+                                double axisHi) {
+        ValueMarker m = marker(value, paint, stroke, label);
+        boolean left = value > 0.5 * (axisLo + axisHi);
+        switch (at) {
+            case TOP -> {
+                m.setLabelAnchor(left ? RectangleAnchor.TOP_LEFT : RectangleAnchor.TOP_RIGHT);
+                m.setLabelTextAnchor(left ? TextAnchor.TOP_RIGHT : TextAnchor.TOP_LEFT);
+            }
+            case MIDDLE -> {
+                m.setLabelAnchor(left ? RectangleAnchor.LEFT : RectangleAnchor.RIGHT);
+                m.setLabelTextAnchor(left ? TextAnchor.CENTER_RIGHT : TextAnchor.CENTER_LEFT);
+            }
+            case BOTTOM -> {
+                m.setLabelAnchor(left ? RectangleAnchor.BOTTOM_LEFT : RectangleAnchor.BOTTOM_RIGHT);
+                m.setLabelTextAnchor(left ? TextAnchor.BOTTOM_RIGHT : TextAnchor.BOTTOM_LEFT);
+            }
+        }
+        return m;
+    }
+
+    private static ValueMarker marker(double value, Paint paint, Stroke stroke, String label) {
         ValueMarker m = new ValueMarker(value, paint, stroke);
         m.setLabel(label);
         m.setLabelFont(ChartStyle.MARKER);
         m.setLabelPaint(paint);
         // Paper behind the label, slightly translucent, so that a label crossing a data line stays legible.
-        m.setLabelBackgroundColor(new Color(Palette.PAPER.getRed(), Palette.PAPER.getGreen(), Palette.PAPER.getBlue(), 210));
+        m.setLabelBackgroundColor(new Color(Palette.PAPER.getRed(), Palette.PAPER.getGreen(), Palette.PAPER.getBlue(),
+                210));
         m.setLabelOffset(new RectangleInsets(4, 4, 4, 4));
-        if (top) {
-            m.setLabelAnchor(left ? RectangleAnchor.TOP_LEFT : RectangleAnchor.TOP_RIGHT);
-            m.setLabelTextAnchor(left ? TextAnchor.TOP_RIGHT : TextAnchor.TOP_LEFT);
-        } else {
-            m.setLabelAnchor(left ? RectangleAnchor.BOTTOM_LEFT : RectangleAnchor.BOTTOM_RIGHT);
-            m.setLabelTextAnchor(left ? TextAnchor.BOTTOM_RIGHT : TextAnchor.BOTTOM_LEFT);
-        }
         return m;
     }
 }

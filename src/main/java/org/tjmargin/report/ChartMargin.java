@@ -79,37 +79,39 @@ final class ChartMargin {
 
         double firstK = sweep.get(0).ambientK();
         double designK = result.atMaximumAmbient().ambientK();
-        double xHiK = designK;
-        plot.addDomainMarker(ChartData.marker(ChartData.celsius(designK), Palette.INK, Palette.designLimitLine(),
-                "design max " + ChartData.temperature(designK), true, true), Layer.BACKGROUND);
-
-        List<String> subtitles = new ArrayList<>();
         MaximumAmbient max = pr.maxAmbient();
-        switch (max.status()) {
-            case FOUND -> {
-                plot.addDomainMarker(ChartData.marker(ChartData.celsius(max.ambientK()), Palette.ACCENT,
-                        Palette.answerLine(), "max ambient " + ChartData.temperature(max.ambientK()), false, false),
-                        Layer.FOREGROUND);
-                xHiK = Math.max(xHiK, max.ambientK());
-            }
-            case HOLDS_TO_LIMIT -> {
-                plot.addDomainMarker(ChartData.marker(ChartData.celsius(max.ambientK()), Palette.ACCENT,
-                        Palette.answerLine(), "holds to " + ChartData.temperature(max.ambientK())
-                                + " (end of search)", false, false), Layer.FOREGROUND);
-                xHiK = Math.max(xHiK, max.ambientK());
-            }
-            case NONE -> subtitles.add("No ambient in the search passes every rule.");
-        }
         Optional<RunawayOnset> onset = pr.runaway();
+        double xHiK = designK;
+        if (max.status() != MaximumAmbient.Status.NONE) {
+            xHiK = Math.max(xHiK, max.ambientK());
+        }
         if (onset.isPresent()) {
-            RunawayOnset o = onset.get();
-            plot.addDomainMarker(ChartData.marker(ChartData.celsius(o.ambientK()), Palette.RUNAWAY_MARK,
-                    Palette.designLimitLine(), (o.atOrBelowSearch() ? "runaway at or below " : "runaway from ")
-                            + ChartData.temperature(o.ambientK()), false, true), Layer.FOREGROUND);
-            xHiK = Math.max(xHiK, o.ambientK());
+            xHiK = Math.max(xHiK, onset.get().ambientK());
         }
         double span = Math.max(1.0, xHiK - firstK);
-        xAxis.setRange(ChartData.celsius(firstK) - 0.02 * span, ChartData.celsius(xHiK) + 0.04 * span);
+        double xLo = ChartData.celsius(firstK) - 0.02 * span;
+        double xHi = ChartData.celsius(xHiK) + 0.04 * span;
+        xAxis.setRange(xLo, xHi);
+
+        plot.addDomainMarker(ChartData.vertical(ChartData.celsius(designK), Palette.INK, Palette.designLimitLine(),
+                "design max " + ChartData.temperature(designK), ChartData.LabelAt.TOP, xLo, xHi), Layer.BACKGROUND);
+        List<String> subtitles = new ArrayList<>();
+        switch (max.status()) {
+            case FOUND -> plot.addDomainMarker(ChartData.vertical(ChartData.celsius(max.ambientK()), Palette.ACCENT,
+                    Palette.answerLine(), "max ambient " + ChartData.temperature(max.ambientK()),
+                    ChartData.LabelAt.BOTTOM, xLo, xHi), Layer.FOREGROUND);
+            case HOLDS_TO_LIMIT -> plot.addDomainMarker(ChartData.vertical(ChartData.celsius(max.ambientK()),
+                    Palette.ACCENT, Palette.answerLine(), "holds to " + ChartData.temperature(max.ambientK())
+                            + " (end of search)", ChartData.LabelAt.BOTTOM, xLo, xHi), Layer.FOREGROUND);
+            case NONE -> subtitles.add("No ambient in the search passes every rule.");
+        }
+        if (onset.isPresent()) {
+            RunawayOnset o = onset.get();
+            plot.addDomainMarker(ChartData.vertical(ChartData.celsius(o.ambientK()), Palette.RUNAWAY_MARK,
+                    Palette.designLimitLine(), (o.atOrBelowSearch() ? "runaway at or below " : "runaway from ")
+                            + ChartData.temperature(o.ambientK()), ChartData.LabelAt.MIDDLE, xLo, xHi),
+                    Layer.FOREGROUND);
+        }
         subtitles.add("Each rule at its worst corner at each ambient; a rule holds where its margin is ≥ 0.");
         if (clipped) {
             subtitles.add("Vertical axis limited to ±" + (int) AXIS_LIMIT_PERCENT

@@ -89,9 +89,12 @@ final class ChartOperatingPoint {
         volts.addSeries(vHigh);
         XYPlot vPlot = new XYPlot(volts, null, ChartStyle.numberAxis("Output (V)"), ChartData.lines(3, 2, true));
 
-        for (XYPlot p : List.of(tPlot, pPlot, vPlot)) {
-            ChartStyle.plot(p);
-            combined.add(p, 1);
+        // The junction temperature is what the chart is about: it gets the most height.
+        int[] weights = {3, 2, 2};
+        List<XYPlot> plots = List.of(tPlot, pPlot, vPlot);
+        for (int i = 0; i < plots.size(); i++) {
+            ChartStyle.plot(plots.get(i));
+            combined.add(plots.get(i), weights[i]);
         }
         ChartStyle.plot(combined);
         return ChartStyle.chart(pr.id() + " — operating point against ambient",

@@ -2,6 +2,7 @@ package org.tjmargin.report;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.stream.Collectors;
 import org.tjmargin.circuit.CircuitSpec;
@@ -29,6 +30,7 @@ import org.tjmargin.solve.PositionSpec;
 import org.tjmargin.solve.Regulation;
 import org.tjmargin.solve.RunawayOnset;
 import org.tjmargin.solve.ThermalOutcome;
+import org.tjmargin.solve.Verdict;
 import org.tjmargin.solve.WorstCheck;
 import org.tjmargin.thermal.AxialLeadMount;
 import org.tjmargin.thermal.Enclosure;
@@ -57,8 +59,8 @@ final class HtmlPositionView {
         this.anchor = "pos-" + stem;
     }
 
-    static HtmlView.Badge badge(org.tjmargin.solve.Verdict v) {
-        return new HtmlView.Badge(v.name(), "verdict-" + v.name().toLowerCase(java.util.Locale.ROOT));
+    static HtmlView.Badge badge(Verdict v) {
+        return new HtmlView.Badge(v.name(), "verdict-" + v.name().toLowerCase(Locale.ROOT));
     }
 
     HtmlView.SummaryRow summaryRow() {
@@ -66,7 +68,7 @@ final class HtmlPositionView {
         String hottestTj = hot.map(p -> HtmlFormat.temperature(p.tjK()))
                 .orElse(atMax.hottest().isPresent() ? statusWord(atMax.hottest().get()) : HtmlFormat.NONE);
         return new HtmlView.SummaryRow(pr.id(), anchor, spec.part().id(), circuitKind(spec.circuit()), badge(pr.verdict()),
-                pr.limitingRuleId(), HtmlFormat.margin(pr.worstMargin()), maxAmbient(pr.maxAmbient()), hottestTj,
+                pr.limitingRuleId(), worstMargin(), maxAmbient(pr.maxAmbient()), hottestTj,
                 hot.map(p -> HtmlFormat.si(p.diodePowerW(), Dimension.POWER)).orElse(HtmlFormat.NONE),
                 outputRange(atMax),
                 atMax.leastCurrent().flatMap(CornerPoint::point)
@@ -90,6 +92,12 @@ final class HtmlPositionView {
                         + pr.limitingRuleId() + ") at " + HtmlFormat.temperature(pr.worstAmbientK()) + " ambient.",
                 pr.regulation().map(r -> new HtmlView.Facts(regulationFacts(r))).orElse(null),
                 pr.runaway().map(o -> new HtmlView.Text(runawayText(o))).orElse(null), charts);
+    }
+
+    /** The worst margin; a runaway position's comes from the search cap, and says so. */
+    private String worstMargin() {
+        String m = HtmlFormat.margin(pr.worstMargin());
+        return pr.verdict() == Verdict.RUNAWAY ? m + " (runaway)" : m;
     }
 
     static String maxAmbient(MaximumAmbient m) {
@@ -152,7 +160,7 @@ final class HtmlPositionView {
                 + HtmlFormat.kelvinDifference(leak.doublingK()) : "no data"));
         f.add(fact("Tj max", HtmlFormat.temperature(r.tjMaxK())));
         f.add(fact("Power rating", ChartRating.describe(r.powerCurve()) + " — "
-                + ChartDeviceRating.referenceLabel(r.powerCurve()).replace(" (°C)", "").toLowerCase(java.util.Locale.ROOT)));
+                + ChartDeviceRating.referenceLabel(r.powerCurve()).replace(" (°C)", "").toLowerCase(Locale.ROOT)));
         f.add(fact("Maximum Zener current Izm", HtmlFormat.si(r.izmA(), Dimension.CURRENT)));
         if (part.standoffV() > 0) {
             f.add(fact("Standoff voltage Vwm", HtmlFormat.si(part.standoffV(), Dimension.VOLTAGE)));
@@ -298,10 +306,18 @@ final class HtmlPositionView {
             String limit = policy.rule(rc.ruleId()).filter(r -> !(r.limit() instanceof Limit.Fixed))
                     .map(r -> HtmlFormat.limit(r.limit(), r.measure()) + " = ").orElse("")
                     + HtmlFormat.measure(rc.limit(), rc.measure());
-            rows.add(new HtmlView.MarginRow(rc.ruleId(), title, HtmlFormat.measure(rc.actual(), rc.measure()),
+            CornerPoint corner = atMax.corners().get(w.cornerIndex());
+            String actual = HtmlFormat.measure(rc.actual(), rc.measure());
+            if (corner.outcome() instanceof ThermalOutcome.Runaway) {
+                // Without an operating point the rules see the junction at the solver's search cap.
+                actual = "runaway (taken at the search cap, " + actual + ")";
+            } else if (corner.outcome() instanceof ThermalOutcome.NotConverged) {
+                actual = "not converged (last iterate " + actual + ")";
+            }
+            rows.add(new HtmlView.MarginRow(rc.ruleId(), title, actual,
                     (rc.bound() == org.tjmargin.derating.Bound.MAX ? "≤ " : "≥ ") + limit,
                     HtmlFormat.margin(rc.margin()), HtmlFormat.measureDifference(rc.difference(), rc.measure()),
-                    atMax.corners().get(w.cornerIndex()).corner().label(), rc.holds() ? "holds" : "violated"));
+                    corner.corner().label(), rc.holds() ? "holds" : "violated"));
         }
         return rows;
     }

@@ -116,6 +116,8 @@ class HtmlReportTest {
         double onsetK = MIXED.positions().get(2).runaway().orElseThrow().ambientK();
         assertTrue(HTML.contains("Thermal runaway begins at an ambient of " + HtmlFormat.temperature(onsetK)));
         assertTrue(HTML.contains("<strong>runaway</strong> — Thermal runaway: no operating point up to"));
+        assertTrue(HTML.contains("runaway (taken at the search cap, "), "a runaway corner's actual is not a Tj");
+        assertTrue(HTML.contains("(runaway)</td>"), "the verdict table flags a runaway position's margin");
     }
 
     @Test
