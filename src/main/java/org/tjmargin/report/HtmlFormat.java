@@ -3,6 +3,7 @@ package org.tjmargin.report;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
+import java.util.Locale;
 import org.tjmargin.derating.Limit;
 import org.tjmargin.derating.Measure;
 import org.tjmargin.units.Dimension;
@@ -66,7 +67,7 @@ final class HtmlFormat {
             return "0";
         }
         if (Math.abs(x) >= 1e6 || Math.abs(x) < 1e-4) {
-            return String.format(java.util.Locale.ROOT, "%." + (PLAIN_DIGITS - 1) + "e", x);
+            return String.format(Locale.ROOT, "%." + (PLAIN_DIGITS - 1) + "e", x);
         }
         BigDecimal b = new BigDecimal(x).round(new MathContext(PLAIN_DIGITS, RoundingMode.HALF_EVEN));
         // Keep trailing zeros up to the significant digits: 1 shows as 1.00, like the SI quantities beside it.

@@ -10,7 +10,9 @@ import org.tjmargin.circuit.CurrentFedSpec;
 import org.tjmargin.circuit.LoadRange;
 import org.tjmargin.circuit.ShuntRegulatorSpec;
 import org.tjmargin.circuit.StandoffClampSpec;
+import org.tjmargin.derating.Bound;
 import org.tjmargin.derating.Limit;
+import org.tjmargin.derating.Measure;
 import org.tjmargin.derating.Policy;
 import org.tjmargin.derating.Rule;
 import org.tjmargin.derating.RuleCheck;
@@ -67,8 +69,8 @@ final class HtmlPositionView {
         Optional<OperatingPoint> hot = atMax.hottest().flatMap(CornerPoint::point);
         String hottestTj = hot.map(p -> HtmlFormat.temperature(p.tjK()))
                 .orElse(atMax.hottest().isPresent() ? statusWord(atMax.hottest().get()) : HtmlFormat.NONE);
-        return new HtmlView.SummaryRow(pr.id(), anchor, spec.part().id(), circuitKind(spec.circuit()), badge(pr.verdict()),
-                pr.limitingRuleId(), worstMargin(), maxAmbient(pr.maxAmbient()), hottestTj,
+        return new HtmlView.SummaryRow(pr.id(), anchor, spec.part().id(), circuitKind(spec.circuit()),
+                badge(pr.verdict()), pr.limitingRuleId(), worstMargin(), maxAmbient(pr.maxAmbient()), hottestTj,
                 hot.map(p -> HtmlFormat.si(p.diodePowerW(), Dimension.POWER)).orElse(HtmlFormat.NONE),
                 outputRange(atMax),
                 atMax.leastCurrent().flatMap(CornerPoint::point)
@@ -140,7 +142,8 @@ final class HtmlPositionView {
         BreakdownDiode m = part.model();
         DiodeRatings r = part.ratings();
         List<HtmlView.Fact> f = new ArrayList<>();
-        f.add(fact("Part", part.id() + (part.kind() == BreakdownPart.Kind.ZENER ? " (Zener)" : " (transient suppressor)")));
+        f.add(fact("Part", part.id()
+                + (part.kind() == BreakdownPart.Kind.ZENER ? " (Zener)" : " (transient suppressor)")));
         f.add(fact("Nominal breakdown voltage", HtmlFormat.si(part.vzNomV(), Dimension.VOLTAGE) + " ± "
                 + HtmlFormat.si(part.vzTolerance(), Dimension.FRACTION) + " at Izt "
                 + HtmlFormat.si(m.iztA(), Dimension.CURRENT)));
@@ -180,7 +183,8 @@ final class HtmlPositionView {
             kind = "thermal resistances given";
         }
         f.add(fact("Mounting", kind));
-        f.add(fact("Rθja (junction → local air)", HtmlFormat.si(path.rThetaJaKPerW(), Dimension.THERMAL_RESISTANCE)));
+        f.add(fact("Rθja (junction → local air)",
+                HtmlFormat.si(path.rThetaJaKPerW(), Dimension.THERMAL_RESISTANCE)));
         f.add(fact("Junction → rating reference point", HtmlFormat.si(path.rThetaJrKPerW(),
                 Dimension.THERMAL_RESISTANCE)));
         f.add(fact("Rθ tolerance (factor)", HtmlFormat.plainRange(spec.rThetaFactor())));
@@ -313,9 +317,13 @@ final class HtmlPositionView {
                 actual = "runaway (taken at the search cap, " + actual + ")";
             } else if (corner.outcome() instanceof ThermalOutcome.NotConverged) {
                 actual = "not converged (last iterate " + actual + ")";
+            } else if (rc.measure() == Measure.POWER_RATIO && corner.allowedPowerW() == 0
+                    || rc.measure() == Measure.RESISTOR_POWER_RATIO && corner.resistorAllowedW() == 0) {
+                // The ratio is a large stand-in when the rating has fallen to zero while power flows.
+                actual = "no rating left here (0 W allowed)";
             }
             rows.add(new HtmlView.MarginRow(rc.ruleId(), title, actual,
-                    (rc.bound() == org.tjmargin.derating.Bound.MAX ? "≤ " : "≥ ") + limit,
+                    (rc.bound() == Bound.MAX ? "≤ " : "≥ ") + limit,
                     HtmlFormat.margin(rc.margin()), HtmlFormat.measureDifference(rc.difference(), rc.measure()),
                     corner.corner().label(), rc.holds() ? "holds" : "violated"));
         }

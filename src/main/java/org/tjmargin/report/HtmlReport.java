@@ -15,6 +15,7 @@ import org.tjmargin.derating.Bound;
 import org.tjmargin.derating.Rule;
 import org.tjmargin.solve.AnalysisResult;
 import org.tjmargin.solve.BoardAtAmbient;
+import org.tjmargin.solve.Verdict;
 import org.tjmargin.thermal.Enclosure;
 import org.tjmargin.units.Dimension;
 
@@ -115,7 +116,7 @@ public final class HtmlReport {
     }
 
     private static String verdictText(AnalysisResult r) {
-        long failing = r.positions().stream().filter(p -> p.verdict() != org.tjmargin.solve.Verdict.PASS).count();
+        long failing = r.positions().stream().filter(p -> p.verdict() != Verdict.PASS).count();
         int n = r.positions().size();
         return switch (r.verdict()) {
             case PASS -> "Every rule of the policy holds at every corner of all " + n + " position"

@@ -5,6 +5,7 @@ import java.awt.Color;
 import java.awt.Paint;
 import java.awt.Stroke;
 import java.util.List;
+import java.util.Locale;
 
 /**
  * The colours and line styles of tjmargin's charts and HTML report, in one place so that a chart and the page around
@@ -98,6 +99,6 @@ public final class Palette {
 
     /** A colour as a CSS hex string, {@code #rrggbb}. */
     public static String css(Color c) {
-        return String.format(java.util.Locale.ROOT, "#%02x%02x%02x", c.getRed(), c.getGreen(), c.getBlue());
+        return String.format(Locale.ROOT, "#%02x%02x%02x", c.getRed(), c.getGreen(), c.getBlue());
     }
 }

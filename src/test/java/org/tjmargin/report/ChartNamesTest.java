@@ -6,9 +6,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.tjmargin.derating.Policy;
 import org.tjmargin.solve.Analysis;
 import org.tjmargin.solve.AnalysisResult;
-import org.tjmargin.derating.Policy;
 import org.tjmargin.solve.SolverSettings;
 
 /** Chart file names: only [A-Za-z0-9_-], never empty, unique on a case-insensitive file system. */

@@ -10,12 +10,15 @@ import java.awt.image.BufferedImage;
 import java.io.ByteArrayInputStream;
 import java.io.IOException;
 import java.io.StringReader;
+import java.util.ArrayList;
 import java.util.List;
 import javax.imageio.ImageIO;
 import javax.xml.XMLConstants;
 import javax.xml.parsers.DocumentBuilder;
 import javax.xml.parsers.DocumentBuilderFactory;
 import javax.xml.parsers.ParserConfigurationException;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.title.TextTitle;
 import org.junit.jupiter.api.Test;
 import org.tjmargin.solve.AnalysisResult;
 import org.w3c.dom.Document;
@@ -98,6 +101,18 @@ class ChartSetTest {
                 ChartSet.kindsFor(MIXED, 0));
         assertEquals(List.of(ChartKind.MARGIN, ChartKind.OPERATING, ChartKind.RATING), ChartSet.kindsFor(MIXED, 2));
         assertThrows(IllegalArgumentException.class, () -> ChartSet.build(MIXED, 2, ChartKind.RESISTOR));
+    }
+
+    @Test
+    void marginChartSaysSoWhenNoAmbientPasses() {
+        JFreeChart chart = ChartSet.build(ReportFixtures.hopeless("board"), 0, ChartKind.MARGIN);
+        List<String> lines = new ArrayList<>();
+        for (Object t : chart.getSubtitles()) {
+            if (t instanceof TextTitle tt) {
+                lines.add(tt.getText());
+            }
+        }
+        assertTrue(lines.contains("No ambient in the search passes every rule."), lines.toString());
     }
 
     @Test

@@ -5,10 +5,12 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 import org.tjmargin.solve.AnalysisResult;
+import org.tjmargin.solve.MaximumAmbient;
 import org.tjmargin.solve.PositionAtAmbient;
 import org.tjmargin.solve.PositionResult;
 
@@ -56,7 +58,8 @@ class HtmlReportTest {
     @Test
     void containsTheCautionsGivenEscaped() {
         assertTrue(HTML.contains(CAUTIONS.get(0)), "first caution missing");
-        assertTrue(HTML.contains("Fuse I²t must exceed the surge&#39;s &amp; stay below the track&#39;s &lt;limit&gt;."),
+        assertTrue(HTML.contains(
+                "Fuse I²t must exceed the surge&#39;s &amp; stay below the track&#39;s &lt;limit&gt;."),
                 "second caution missing or unescaped");
     }
 
@@ -78,7 +81,7 @@ class HtmlReportTest {
     @Test
     void selfContainedWithoutScriptsOrExternalResources() {
         assertFalse(HTML.contains("<script"), "script element");
-        assertFalse(HTML.toLowerCase(java.util.Locale.ROOT).contains("http"),
+        assertFalse(HTML.toLowerCase(Locale.ROOT).contains("http"),
                 "a URL in a page whose user text has none");
         for (String forbidden : List.of("<link", "<img", "<iframe", "<object", "<embed", "src=", "@import",
                 "@font-face", "javascript:")) {
@@ -136,6 +139,19 @@ class HtmlReportTest {
     void flagsEstimatedValues() {
         assertTrue(HTML.contains("<li>Rθja from a rule of thumb</li>"));
         assertTrue(HTML.contains("<li>leakage doubling interval: common practice</li>"));
+    }
+
+    @Test
+    void aPositionFailingEverywhereHasNoMaximumAmbient() {
+        AnalysisResult r = ReportFixtures.hopeless("Hopeless board");
+        assertEquals(MaximumAmbient.Status.NONE, r.positions().get(0).maxAmbient().status());
+        String html = HtmlReport.render(r, List.of(), List.of(), "0.1.0", ChartSet.render(r));
+        assertTrue(html.contains("none (fails at every ambient searched)"));
+        assertTrue(html.contains("Enclosure air: a sealed box of "), "sealed-box assumption");
+        assertTrue(html.contains("Load resistance RL"), "resistive load");
+        assertTrue(html.contains("no rating left here (0 W allowed)"), "a zero rating is not shown as a ratio");
+        assertTrue(html.contains("verdict-fail\">FAIL</span>"));
+        assertEquals(4, count(html, "<svg"));
     }
 
     @Test

@@ -88,6 +88,28 @@ final class ReportFixtures {
                 Range.between(23.0, 24.0), 0.0), Range.exact(0.0), Range.exact(1.0), Range.exact(0.0), List.of());
     }
 
+    /**
+     * A regulator feeding a resistive load in a sealed box, with a diode whose rating reaches zero at 100 °C lead
+     * temperature, under a rule no point can meet: fails at every ambient, so there is no maximum ambient.
+     */
+    static AnalysisResult hopeless(String name) {
+        BreakdownPart z = zener();
+        BreakdownPart early = new BreakdownPart("ZX-early-invented", z.kind(), z.vzNomV(), z.vzTolerance(), z.model(),
+                new DiodeRatings(c(175), PowerRatingCurve.flatThenLinear(RatingReference.LEAD, 9.5e-3, 0.5, c(25),
+                        c(100)), 0.5 / 6.8), 0.0, List.of());
+        SeriesResistor rs = new SeriesResistor(Range.exact(220.0),
+                PowerRatingCurve.flatThenLinear(RatingReference.AMBIENT, 0.0, 0.25, c(70), c(155)));
+        PositionSpec p = new PositionSpec("D7", early, new GivenPath(300.0, 150.0, List.of()),
+                new ShuntRegulatorSpec(Range.relative(12.0, 0.05), rs, new LoadRange.Resistive(
+                        Range.between(2_000.0, 10_000.0))), Range.exact(0.0), Range.exact(1.0),
+                Range.exact(early.model().tc().alphaVPerK()), List.of());
+        List<Rule> rules = new ArrayList<>(policy().rules());
+        rules.add(new Rule("power-nil", "no diode power at all", Measure.POWER_RATIO, Bound.MAX,
+                new Limit.Fixed(1e-6), "invented: cannot be met"));
+        return Analysis.run(new Board(name, List.of(p), new Enclosure.SealedBox(0.05, 6.0, 0.5),
+                new AmbientRange(c(0), c(85), 6)), new Policy("hopeless", "invented", rules), SolverSettings.DEFAULT);
+    }
+
     /** The built-in minimum plus a few policy rules, so that charts have several lines. */
     static Policy policy() {
         List<Rule> rules = new ArrayList<>(Policy.builtInMinimum().rules());

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import org.junit.jupiter.api.Test;
 
 /** Input digests and the report's other inputs. */
@@ -20,7 +21,7 @@ class ReportInputsTest {
     @Test
     void digestsAreKeptInLowerCase() {
         String upper = "BA7816BF8F01CFEA414140DE5DAE2223B00361A396177A9CB410FF61F20015AD";
-        assertEquals(upper.toLowerCase(java.util.Locale.ROOT), new ReportInputs.InputDigest("a", upper).sha256());
+        assertEquals(upper.toLowerCase(Locale.ROOT), new ReportInputs.InputDigest("a", upper).sha256());
     }
 
     @Test
