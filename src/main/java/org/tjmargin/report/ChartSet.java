@@ -1,0 +1,66 @@
+package org.tjmargin.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import org.jfree.chart.JFreeChart;
+import org.tjmargin.solve.AnalysisResult;
+import org.tjmargin.solve.PositionSpec;
+
+/**
+ * Every chart of an analysis, drawn as PNG and SVG, in board order and per position in the order of
+ * {@link ChartKind}: {@code <position>-margin}, {@code -operating}, {@code -rating} and, for shunt regulators,
+ * {@code -resistor} (names from {@link ChartNames}). Nothing is written to disk here.
+ *
+ * <p>The charts read the analysis only; none recomputes a physical quantity. Headless: set
+ * {@code java.awt.headless=true} in a process without a display. Stateless and thread-safe.
+ */
+public final class ChartSet {
+
+    private ChartSet() {
+    }
+
+    /** All charts of the analysis at {@link ChartSize#DEFAULT}. */
+    public static List<RenderedChart> render(AnalysisResult result) {
+        return render(result, ChartSize.DEFAULT);
+    }
+
+    /** All charts of the analysis at {@code size}. */
+    public static List<RenderedChart> render(AnalysisResult result, ChartSize size) {
+        Objects.requireNonNull(result, "result");
+        Objects.requireNonNull(size, "size");
+        List<String> stems = ChartNames.stems(result);
+        List<RenderedChart> out = new ArrayList<>();
+        for (int i = 0; i < result.positions().size(); i++) {
+            for (ChartKind kind : kindsFor(result, i)) {
+                out.add(ChartRenderer.render(ChartNames.baseName(stems.get(i), kind), kind, build(result, i, kind),
+                        size));
+            }
+        }
+        return List.copyOf(out);
+    }
+
+    /** The charts a position gets: all four for a shunt regulator, no resistor chart otherwise. */
+    public static List<ChartKind> kindsFor(AnalysisResult result, int positionIndex) {
+        PositionSpec spec = result.board().positions().get(positionIndex);
+        List<ChartKind> kinds = new ArrayList<>(List.of(ChartKind.MARGIN, ChartKind.OPERATING, ChartKind.RATING));
+        if (ChartResistorRating.applies(spec)) {
+            kinds.add(ChartKind.RESISTOR);
+        }
+        return List.copyOf(kinds);
+    }
+
+    /**
+     * One chart as a JFreeChart object, styled but not drawn (for a caller that draws it elsewhere).
+     *
+     * @throws IllegalArgumentException for {@link ChartKind#RESISTOR} at a position without a series resistor
+     */
+    public static JFreeChart build(AnalysisResult result, int positionIndex, ChartKind kind) {
+        return switch (kind) {
+            case MARGIN -> ChartMargin.build(result, positionIndex);
+            case OPERATING -> ChartOperatingPoint.build(result, positionIndex);
+            case RATING -> ChartDeviceRating.build(result, positionIndex);
+            case RESISTOR -> ChartResistorRating.build(result, positionIndex);
+        };
+    }
+}

@@ -1,0 +1,91 @@
+package org.tjmargin.report;
+
+import java.util.List;
+
+/**
+ * The HTML report's view model: plain text already formatted for reading, which the Mustache templates place and
+ * escape. Nothing here is computed beyond choosing and formatting values of the results.
+ *
+ * <p>Each record's components are read by the template by name ({@code {{designName}}}); a {@code null} or an empty
+ * list hides its section.
+ */
+final class HtmlView {
+
+    private HtmlView() {
+    }
+
+    /** The whole page. */
+    record Page(String designName, String toolVersion, Badge verdict, String verdictText, List<Fact> design,
+                List<SummaryRow> summary, String summaryAmbient, List<Position> positions, Policy policy,
+                List<String> cautions, List<Input> inputs, List<Fact> colours) {
+
+        /** True when there is a caution to print. */
+        boolean hasCautions() {
+            return !cautions.isEmpty();
+        }
+    }
+
+    /** A label and its value. */
+    record Fact(String label, String value) {
+    }
+
+    /** A verdict word with its style class. */
+    record Badge(String word, String cssClass) {
+    }
+
+    /** One row of the verdict table. */
+    record SummaryRow(String id, String anchor, String part, String circuit, Badge verdict, String limitingRule,
+                      String worstMargin, String maxAmbient, String hottestTj, String diodePower, String output,
+                      String leastCurrent) {
+    }
+
+    /** One position's section. */
+    record Position(String id, String anchor, Badge verdict, String summary, List<Fact> part, List<Fact> mounting,
+                    List<Fact> circuit, List<String> estimates, List<String> assumptions, String cornersCaption,
+                    List<CornerRow> corners, boolean hasResistor, String marginsCaption, List<MarginRow> margins,
+                    String worstOverRange, Facts regulation, Text runaway, List<Chart> charts) {
+
+        /** True when there is a chart to place. */
+        boolean hasCharts() {
+            return !charts.isEmpty();
+        }
+    }
+
+    /** A group of facts that may be absent as a whole ({@code null}). */
+    record Facts(List<Fact> facts) {
+    }
+
+    /** A paragraph that may be absent ({@code null}). */
+    record Text(String text) {
+    }
+
+    /**
+     * One corner at the design's highest ambient; for a corner without an operating point only {@code label},
+     * {@code status} and {@code note} are set.
+     */
+    record CornerRow(String label, String status, boolean converged, String note, String tj, String voltage,
+                     String current, String diodePower, String allowedPower, String resistorPower,
+                     String reference, String loopGain, String evaluations, String cssClass) {
+    }
+
+    /** One rule at its worst corner. */
+    record MarginRow(String ruleId, String title, String actual, String limit, String margin, String difference,
+                     String corner, String cssClass) {
+    }
+
+    /** A chart placed inline. */
+    record Chart(String caption, String svg, String fileName) {
+    }
+
+    /** The policy section. */
+    record Policy(String name, String provenance, List<RuleRow> rules) {
+    }
+
+    /** One rule of the policy. */
+    record RuleRow(String id, String title, String quantity, String bound, String limit, String provenance) {
+    }
+
+    /** One input file. */
+    record Input(String path, String sha256) {
+    }
+}
