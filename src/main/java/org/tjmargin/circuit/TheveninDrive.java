@@ -59,18 +59,28 @@ final class TheveninDrive {
         }
         double izk = d.izkA();
         if (vthV - d.kneeVoltageV(tjK) - rthOhm * izk >= 0) {
-            // On the knee: Vth − V(I) − Rth·I = 0 for I in [Izk, Izt], decreasing in I.
+            // On the knee: h(I) = Vth − V(I) − Rth·I = 0 for I in [Izk, Izt], decreasing in I, with
+            // h'(I) = −(Zz(I) + Rth). Newton's method safeguarded by the bracket (a step leaving it bisects).
             double lo = izk;
             double hi = d.iztA();
-            for (int i = 0; i < MAX_HALVINGS && hi - lo > 1e-15 * hi; i++) {
-                double mid = 0.5 * (lo + hi);
-                if (vthV - d.breakdownVoltageV(mid, tjK) - rthOhm * mid >= 0) {
-                    lo = mid;
+            double i = hi;
+            for (int n = 0; n < MAX_HALVINGS && hi - lo > 1e-15 * hi; n++) {
+                double h = vthV - d.breakdownVoltageV(i, tjK) - rthOhm * i;
+                if (h >= 0) {
+                    lo = i;
                 } else {
-                    hi = mid;
+                    hi = i;
                 }
+                double next = i + h / (d.dynamicImpedanceOhm(i) + rthOhm);
+                if (!(next > lo && next < hi)) {
+                    next = 0.5 * (lo + hi);
+                }
+                if (Math.abs(next - i) <= 1e-15 * hi) {
+                    i = next;
+                    break;
+                }
+                i = next;
             }
-            double i = 0.5 * (lo + hi);
             return new double[] {d.breakdownVoltageV(i, tjK), i, Region.KNEE.ordinal()};
         }
         if (vthV <= 0) {

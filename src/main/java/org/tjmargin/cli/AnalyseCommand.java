@@ -15,7 +15,10 @@ import org.tjmargin.design.LoadedPolicy;
 import org.tjmargin.design.ProfileLoader;
 import org.tjmargin.report.Cautions;
 import org.tjmargin.report.OutputFiles;
-import org.tjmargin.report.Provenance;
+import org.tjmargin.report.ChartSet;
+import org.tjmargin.report.HtmlReport;
+import org.tjmargin.report.RenderedChart;
+import org.tjmargin.report.ReportInputs;
 import org.tjmargin.report.ResultsJson;
 import org.tjmargin.report.SummaryTable;
 import org.tjmargin.report.SweepCsv;
@@ -85,12 +88,17 @@ public final class AnalyseCommand implements Callable<Integer> {
         List<String> cautions = Cautions.forResult(result);
         List<InputFile> allInputs = new java.util.ArrayList<>(loaded.inputs());
         allInputs.addAll(loadedPolicy.inputs());
-        Provenance provenance = new Provenance(VersionProvider.version(), allInputs.stream()
-                .map(f -> new Provenance.InputDigest(f.path().toString(), f.sha256())).toList());
-        String resultsJson = ResultsJson.render(result, cautions, provenance);
+        ReportInputs provenance = new ReportInputs(VersionProvider.version(), cautions, allInputs.stream()
+                .map(f -> new ReportInputs.InputDigest(f.path().toString(), f.sha256())).toList());
+        String resultsJson = ResultsJson.render(result, provenance);
+        List<RenderedChart> charts = ChartSet.render(result);
         OutputFiles files = new OutputFiles()
                 .text("results.json", resultsJson)
-                .text("sweep.csv", SweepCsv.render(result));
+                .text("sweep.csv", SweepCsv.render(result))
+                .text("report.html", HtmlReport.render(result, provenance, charts));
+        for (RenderedChart c : charts) {
+            files.bytes(c.pngFileName(), c.png()).text(c.svgFileName(), c.svg());
+        }
         try {
             List<Path> inputs = allInputs.stream().map(InputFile::path).toList();
             Path clash = files.wouldOverwrite(out, inputs);
@@ -108,7 +116,8 @@ public final class AnalyseCommand implements Callable<Integer> {
             stdout.print(resultsJson);
         } else {
             stdout.print(SummaryTable.render(result, cautions));
-            stdout.println("written: " + String.join(", ", files.names()) + " in " + out);
+            stdout.println("written into " + out + ": results.json, sweep.csv, report.html and " + charts.size()
+                    + " charts (PNG and SVG)");
         }
         stdout.flush();
         return ExitCodes.of(result.verdict());

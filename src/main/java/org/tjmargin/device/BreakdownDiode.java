@@ -116,6 +116,15 @@ public record BreakdownDiode(double vz0At25V, double rzOhm, double iztA, double 
         return vz0V + rzOhm * iztA - k.aVolts() * Math.log(iztA / currentA) - k.bOhm() * (iztA - currentA);
     }
 
+    /** Dynamic impedance {@code dV/dI} of the breakdown characteristic at {@code currentA} ≥ {@code Izk} (Ω). */
+    public double dynamicImpedanceOhm(double currentA) {
+        if (currentA >= iztA || knee instanceof KneeModel.Linear) {
+            return rzOhm;
+        }
+        KneeModel.CurrentDependent k = (KneeModel.CurrentDependent) knee;
+        return k.aVolts() / currentA + k.bOhm();
+    }
+
     /** Voltage at the knee current {@code Izk}, the lower end of regulation (V). */
     public double kneeVoltageV(double tjK) {
         return breakdownVoltageV(izkA, tjK);

@@ -28,6 +28,11 @@ final class ChartRenderer {
      * @param baseName file name without extension; also the prefix of the SVG's internal ids, so that several SVG
      *                 charts inline in one HTML page never share a clip-path id
      */
+    static {
+        // Encode in memory only: ImageIO otherwise spools every stream through a temporary file.
+        ImageIO.setUseCache(false);
+    }
+
     static RenderedChart render(String baseName, ChartKind kind, JFreeChart chart, ChartSize size) {
         return new RenderedChart(baseName, kind, size, png(chart, size), svg(baseName, chart, size));
     }

@@ -30,14 +30,20 @@ public final class ChartSet {
         Objects.requireNonNull(result, "result");
         Objects.requireNonNull(size, "size");
         List<String> stems = ChartNames.stems(result);
-        List<RenderedChart> out = new ArrayList<>();
+        record Task(int position, ChartKind kind) {
+        }
+        List<Task> tasks = new ArrayList<>();
         for (int i = 0; i < result.positions().size(); i++) {
             for (ChartKind kind : kindsFor(result, i)) {
-                out.add(ChartRenderer.render(ChartNames.baseName(stems.get(i), kind), kind, build(result, i, kind),
-                        size));
+                tasks.add(new Task(i, kind));
             }
         }
-        return List.copyOf(out);
+        // Charts are independent objects, each drawn into its own image and SVG context, so they render on all
+        // cores; the ordered stream keeps the list in position/kind order.
+        return tasks.parallelStream()
+                .map(t -> ChartRenderer.render(ChartNames.baseName(stems.get(t.position()), t.kind()), t.kind(),
+                        build(result, t.position(), t.kind()), size))
+                .toList();
     }
 
     /** The charts a position gets: all four for a shunt regulator, no resistor chart otherwise. */

@@ -5,7 +5,6 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.util.List;
 import org.tjmargin.derating.Measure;
 import org.tjmargin.derating.Rule;
 import org.tjmargin.derating.RuleCheck;
@@ -33,7 +32,7 @@ public final class ResultsJson {
     }
 
     /** Renders the whole result. */
-    public static String render(AnalysisResult r, List<String> cautions, Provenance provenance) {
+    public static String render(AnalysisResult r, ReportInputs provenance) {
         ObjectNode root = MAPPER.createObjectNode();
         root.putObject("tool").put("name", "tjmargin").put("version", provenance.toolVersion());
         root.put("design", r.board().name());
@@ -56,11 +55,11 @@ public final class ResultsJson {
             positions.add(position(r, i));
         }
         ArrayNode inputs = root.putArray("inputs");
-        for (Provenance.InputDigest d : provenance.inputs()) {
+        for (ReportInputs.InputDigest d : provenance.inputs()) {
             inputs.addObject().put("path", d.path()).put("sha256", d.sha256());
         }
         ArrayNode c = root.putArray("cautions");
-        cautions.forEach(c::add);
+        provenance.cautions().forEach(c::add);
         try {
             return MAPPER.writeValueAsString(root) + "\n";
         } catch (JsonProcessingException e) {

@@ -1,6 +1,5 @@
 package org.tjmargin.solve;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.tjmargin.derating.Policy;
@@ -23,13 +22,23 @@ public final class Analysis {
      */
     public static AnalysisResult run(Board board, Policy policy, SolverSettings settings) {
         PreparedBoard prepared = PreparedBoard.of(board);
-        List<BoardAtAmbient> sweep = new ArrayList<>();
-        for (double t : board.ambient().temperaturesK()) {
-            sweep.add(BoardSolver.solveAt(prepared, policy, t, settings));
-        }
-        List<PositionResult> results = new ArrayList<>();
+        // Every ambient is an independent pure solve, and so is every position's search below: they run on all
+        // cores, and the ordered streams make the result identical whatever the number of threads.
+        List<BoardAtAmbient> sweep = java.util.Arrays.stream(board.ambient().temperaturesK()).parallel()
+                .mapToObj(t -> BoardSolver.solveAt(prepared, policy, t, settings)).toList();
+        List<PositionResult> results = java.util.stream.IntStream.range(0, board.positions().size()).parallel()
+                .mapToObj(i -> positionResult(prepared, policy, sweep, i, settings)).toList();
         Verdict overall = Verdict.PASS;
-        for (int i = 0; i < board.positions().size(); i++) {
+        for (PositionResult r : results) {
+            overall = overall.worse(r.verdict());
+        }
+        return new AnalysisResult(board, policy, sweep, results, overall);
+    }
+
+    private static PositionResult positionResult(PreparedBoard prepared, Policy policy, List<BoardAtAmbient> sweep,
+                                                 int i, SolverSettings settings) {
+        Board board = prepared.board();
+        {
             PositionSpec spec = board.positions().get(i);
             Verdict v = Verdict.PASS;
             double worst = Double.POSITIVE_INFINITY;
@@ -52,10 +61,8 @@ public final class Analysis {
             RunawayOnset onset = RunawayOnset.find(prepared, policy, i, sweep, settings);
             BoardAtAmbient hottest = sweep.get(sweep.size() - 1);
             Optional<Regulation> reg = Regulation.of(spec, hottest.positions().get(i).tLocalK(), settings);
-            results.add(new PositionResult(spec.id(), v, limiting, worst, worstT, max, Optional.ofNullable(onset), reg,
-                    spec.allNotes()));
-            overall = overall.worse(v);
+            return new PositionResult(spec.id(), v, limiting, worst, worstT, max, Optional.ofNullable(onset), reg,
+                    spec.allNotes());
         }
-        return new AnalysisResult(board, policy, sweep, results, overall);
     }
 }

@@ -47,7 +47,7 @@ public final class BoardSolver {
         PointStatus airStatus = PointStatus.CONVERGED;
         if (enc.couplesPositions()) {
             FixedPointOutcome air = LowestFixedPoint.find(
-                    dT -> enc.riseK(boardHeatW(board, ambientK + dT, settings)), 0.0, AIR_BALANCE);
+                    dT -> enc.riseK(boardHeatW(board, ambientK + dT, settings)), 0.0, AIR_BALANCE, false);
             evals = air.evaluations();
             if (air instanceof FixedPointOutcome.Root r) {
                 rise = r.x();

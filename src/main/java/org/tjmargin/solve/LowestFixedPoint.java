@@ -49,6 +49,16 @@ public final class LowestFixedPoint {
      * @return the outcome
      */
     public static FixedPointOutcome find(DoubleUnaryOperator map, double x0, SolverSettings settings) {
+        return find(map, x0, settings, true);
+    }
+
+    /**
+     * As {@link #find(DoubleUnaryOperator, double, SolverSettings)}; without {@code loopGain} the root's loop gain
+     * is not computed (reported as 0) and its two extra evaluations are saved, for maps that are costly to
+     * evaluate and whose gain nobody reads (the board's air balance).
+     */
+    public static FixedPointOutcome find(DoubleUnaryOperator map, double x0, SolverSettings settings,
+                                         boolean loopGain) {
         final double cap = settings.capK();
         final double tol = settings.toleranceK();
         final int budget = settings.maxEvaluations();
@@ -58,7 +68,7 @@ public final class LowestFixedPoint {
         double ga = xa - heat(map, xa);
         evals++;
         if (ga >= -tol) {
-            return root(map, xa, ga, evals, settings);
+            return root(map, xa, ga, evals, loopGain);
         }
         final double maxStep = settings.maxStepK();
         double xb = Math.min(xa + Math.min(-ga, maxStep), cap);
@@ -66,10 +76,10 @@ public final class LowestFixedPoint {
         evals++;
         while (evals < budget) {
             if (Math.abs(gb) <= tol) {
-                return root(map, xb, gb, evals, settings);
+                return root(map, xb, gb, evals, loopGain);
             }
             if (gb > 0) {
-                return brent(map, xa, xb, evals, settings);
+                return brent(map, xa, xb, evals, settings, loopGain);
             }
             if (xb >= cap) {
                 return new FixedPointOutcome.Runaway(xb, evals);
@@ -99,7 +109,7 @@ public final class LowestFixedPoint {
     }
 
     private static FixedPointOutcome brent(DoubleUnaryOperator map, double lo, double hi, int evalsSoFar,
-                                           SolverSettings settings) {
+                                           SolverSettings settings, boolean loopGain) {
         // The bracket is shrunk to 1 % of the tolerance (relative 1e-15, a few ulps at 300 K-scale values) because
         // where g is steep (loop gain far below zero) the residual is the bracket times the slope; the function value
         // accuracy is a tenth of the tolerance so that a flat g stops on the residual instead.
@@ -113,14 +123,17 @@ public final class LowestFixedPoint {
                 // A sign change without a zero: F jumps across the diagonal. No operating point to stand behind.
                 return new FixedPointOutcome.Exhausted(x, g, evals + 1);
             }
-            return root(map, x, g, evals + 1, settings);
+            return root(map, x, g, evals + 1, loopGain);
         } catch (MathIllegalStateException e) {
             return new FixedPointOutcome.Exhausted(hi, hi - map.applyAsDouble(hi), settings.maxEvaluations());
         }
     }
 
     private static FixedPointOutcome root(DoubleUnaryOperator map, double x, double g, int evals,
-                                          SolverSettings settings) {
+                                          boolean loopGain) {
+        if (!loopGain) {
+            return new FixedPointOutcome.Root(x, g, 0.0, evals);
+        }
         double gain = (map.applyAsDouble(x + GAIN_STEP) - map.applyAsDouble(x - GAIN_STEP)) / (2 * GAIN_STEP);
         return new FixedPointOutcome.Root(x, g, gain, evals + 2);
     }
