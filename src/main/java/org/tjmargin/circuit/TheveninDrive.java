@@ -63,7 +63,9 @@ final class TheveninDrive {
             // h'(I) = −(Zz(I) + Rth). Newton's method safeguarded by the bracket (a step leaving it bisects).
             double lo = izk;
             double hi = d.iztA();
-            double i = hi;
+            // Start where the tangent at Izt (the straight line's slope) meets the source line: on a convex knee
+            // this lands close to the root, and Newton needs two or three steps.
+            double i = Math.min(hi, Math.max(lo, lineI));
             for (int n = 0; n < MAX_HALVINGS && hi - lo > 1e-15 * hi; n++) {
                 double h = vthV - d.breakdownVoltageV(i, tjK) - rthOhm * i;
                 if (h >= 0) {

@@ -23,7 +23,8 @@ public record RuleContext(Map<Measure, Double> values, double tjMaxK, double ref
             }
             copy.put(e.getKey(), e.getValue());
         }
-        values = Map.copyOf(copy);
+        // An unmodifiable view of the EnumMap: lookups by ordinal, no hashing (this runs for every corner).
+        values = java.util.Collections.unmodifiableMap(copy);
     }
 
     /** The temperature a temperature-dependent limit is read at. */

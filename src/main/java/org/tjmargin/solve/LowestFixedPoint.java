@@ -72,6 +72,7 @@ public final class LowestFixedPoint {
         }
         final double maxStep = settings.maxStepK();
         double xb = Math.min(xa + Math.min(-ga, maxStep), cap);
+        double lastSlope = Double.NaN;
         double gb = xb - heat(map, xb);
         evals++;
         while (evals < budget) {
@@ -85,6 +86,10 @@ public final class LowestFixedPoint {
                 return new FixedPointOutcome.Runaway(xb, evals);
             }
             double slope = (gb - ga) / (xb - xa);
+            // Where two successive chords agree in slope within 10 %, g is nearly linear over the last steps and
+            // a longer step (up to four caps) is safe; otherwise one cap.
+            double reach = Math.abs(slope - lastSlope) <= 0.1 * Math.abs(slope) ? 4 * maxStep : maxStep;
+            lastSlope = slope;
             double next;
             if (slope > 0) {
                 next = xb - gb / slope;
@@ -95,7 +100,7 @@ public final class LowestFixedPoint {
             }
             xa = xb;
             ga = gb;
-            xb = Math.min(Math.min(next, xb + maxStep), cap);
+            xb = Math.min(Math.min(next, xb + reach), cap);
             gb = xb - heat(map, xb);
             evals++;
         }
