@@ -6,7 +6,7 @@
  *
  * <p>Entry point: {@link org.tjmargin.design.DesignLoader#load(java.nio.file.Path)}. Every problem found in a file
  * is collected, located by file, line, column and field path, and all of them are thrown together as one
- * {@link org.tjmargin.design.InputException}. The format is described in {@code docs/file-format.md}.
+ * {@link org.tjmargin.design.InputException}. The format is described in {@code src/site/markdown/file-format.md}.
  *
  * <p>This is the only package, besides {@code cli}, that reads input files. It depends on the domain packages and
  * on {@code units} for every quantity read from text; the domain packages never depend on it.
