@@ -28,7 +28,7 @@ public final class CheckProfileCommand implements Callable<Integer> {
             Policy p = ProfileLoader.load(file).policy();
             PrintWriter out = spec.commandLine().getOut();
             out.println(file + ": valid profile '" + p.name() + "' with " + p.rules().size() + " rules");
-            p.rules().forEach(r -> out.println("    " + r.id() + ": " + r.limit().describe()));
+            p.rules().forEach(r -> out.println("    " + r.id() + ": " + r.limit().describe(r.measure().isTemperature())));
             out.flush();
             return ExitCodes.PASS;
         } catch (InputException e) {

@@ -28,7 +28,7 @@ public final class ProfilesCommand implements Callable<Integer> {
             if (!brief) {
                 for (Rule r : p.rules()) {
                     out.println("    " + r.id() + ": " + r.title() + " [" + r.measure().key() + " "
-                            + (r.bound() == org.tjmargin.derating.Bound.MAX ? "≤ " : "≥ ") + r.limit().describe()
+                            + (r.bound() == org.tjmargin.derating.Bound.MAX ? "≤ " : "≥ ") + r.limit().describe(r.measure().isTemperature())
                             + "] — " + r.provenance());
                 }
             }

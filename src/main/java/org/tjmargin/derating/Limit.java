@@ -18,8 +18,18 @@ public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.Lower
     /** The limit for this context (SI, the rule's unit). */
     double valueFor(RuleContext context);
 
-    /** A readable form, e.g. {@code Tj max − 40 K}. */
-    String describe();
+    /**
+     * A readable form in the rule's display unit, e.g. {@code Tj max − 40 K}, {@code 125.0 °C}, {@code 0.5}.
+     *
+     * @param temperature true for a temperature rule (values shown in °C), false for a ratio
+     */
+    String describe(boolean temperature);
+
+    /** Formats one limit value: °C with one decimal for temperatures, four significant digits for ratios. */
+    static String value(double v, boolean temperature) {
+        return temperature ? String.format(java.util.Locale.ROOT, "%.1f °C", v - 273.15)
+                : String.format(java.util.Locale.ROOT, "%.4g", v).replaceAll("\\.?0+$", "");
+    }
 
     /**
      * A fixed number in the rule's unit (K for temperatures).
@@ -39,8 +49,8 @@ public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.Lower
         }
 
         @Override
-        public String describe() {
-            return Double.toString(value);
+        public String describe(boolean temperature) {
+            return Limit.value(value, temperature);
         }
     }
 
@@ -62,8 +72,10 @@ public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.Lower
         }
 
         @Override
-        public String describe() {
-            return marginK == 0 ? "Tj max" : "Tj max − " + marginK + " K";
+        public String describe(boolean temperature) {
+            return marginK == 0 ? "Tj max"
+                    : "Tj max − " + String.format(java.util.Locale.ROOT, "%.4g", marginK).replaceAll("\\.?0+$", "")
+                    + " K";
         }
     }
 
@@ -80,8 +92,8 @@ public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.Lower
         }
 
         @Override
-        public String describe() {
-            return "lower of (" + a.describe() + ", " + b.describe() + ")";
+        public String describe(boolean temperature) {
+            return "lower of (" + a.describe(temperature) + ", " + b.describe(temperature) + ")";
         }
     }
 
@@ -110,6 +122,18 @@ public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.Lower
             }
         }
 
+        /** Breakpoint temperatures (K), a copy. */
+        @Override
+        public double[] temperaturesK() {
+            return temperaturesK.clone();
+        }
+
+        /** Limit values at the breakpoints, a copy. */
+        @Override
+        public double[] values() {
+            return values.clone();
+        }
+
         @Override
         public double valueFor(RuleContext context) {
             double t = context.temperatureK(basis);
@@ -127,12 +151,12 @@ public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.Lower
         }
 
         @Override
-        public String describe() {
+        public String describe(boolean temperature) {
             StringBuilder sb = new StringBuilder("by ").append(basis.name().toLowerCase(java.util.Locale.ROOT)
                     .replace('_', ' ')).append(" temperature:");
             for (int i = 0; i < temperaturesK.length; i++) {
                 sb.append(String.format(java.util.Locale.ROOT, " %.1f °C → %s", temperaturesK[i] - 273.15,
-                        Double.toString(values[i])));
+                        Limit.value(values[i], temperature)));
                 if (i + 1 < temperaturesK.length) {
                     sb.append(',');
                 }
@@ -154,7 +178,7 @@ public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.Lower
 
         @Override
         public String toString() {
-            return describe();
+            return describe(false);
         }
     }
 }

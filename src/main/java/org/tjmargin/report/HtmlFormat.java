@@ -86,8 +86,8 @@ final class HtmlFormat {
     }
 
     /**
-     * A limit for a reader, in the rule's display unit. {@link Limit#describe()} prints SI numbers without a unit
-     * (a fixed temperature limit as kelvin); the report shows the same limit in °C or as a plain ratio.
+     * A limit for a reader, in the rule's display unit. The report formats with the units module
+     * (SI prefixes, °C), where {@link Limit#describe(boolean)} is the plain form for the terminal and JSON.
      */
     static String limit(Limit limit, Measure m) {
         if (limit instanceof Limit.Fixed f) {
@@ -95,6 +95,17 @@ final class HtmlFormat {
         }
         if (limit instanceof Limit.BelowTjMax b) {
             return b.marginK() == 0 ? "Tj max" : "Tj max − " + kelvinDifference(b.marginK());
+        }
+        if (limit instanceof Limit.TemperatureCurve c) {
+            StringBuilder sb = new StringBuilder("by ").append(c.basis().name().toLowerCase(java.util.Locale.ROOT)
+                    .replace('_', ' ')).append(" temperature:");
+            double[] ts = c.temperaturesK();
+            double[] vs = c.values();
+            for (int i = 0; i < ts.length; i++) {
+                sb.append(i == 0 ? " " : ", ").append(measure(ts[i], Measure.JUNCTION_TEMPERATURE)).append(" → ")
+                        .append(measure(vs[i], m));
+            }
+            return sb.toString();
         }
         Limit.LowerOf l = (Limit.LowerOf) limit;
         return "lower of " + limit(l.a(), m) + " and " + limit(l.b(), m);

@@ -47,7 +47,7 @@ public final class ResultsJson {
         ArrayNode rules = pol.putArray("rules");
         for (Rule rule : r.policy().rules()) {
             rules.addObject().put("id", rule.id()).put("title", rule.title()).put("measure", rule.measure().name())
-                    .put("bound", rule.bound().name()).put("limit", rule.limit().describe())
+                    .put("bound", rule.bound().name()).put("limit", rule.limit().describe(rule.measure().isTemperature()))
                     .put("provenance", rule.provenance());
         }
         ArrayNode positions = root.putArray("positions");

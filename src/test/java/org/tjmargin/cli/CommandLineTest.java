@@ -89,6 +89,16 @@ class CommandLineTest {
     }
 
     @Test
+    void profileFileWithATemperatureCurveLimitReachesEveryWriter() throws IOException {
+        Path out = tmp.resolve("curve");
+        Run r = run("analyse", "demo/design.yaml", "--out", out.toString(), "--policy",
+                "src/test/resources/profiles/child-of-industrial.yaml");
+        assertTrue(r.status() == ExitCodes.PASS || r.status() == ExitCodes.VIOLATION, r.err());
+        assertTrue(Files.readString(out.resolve("report.html")).contains("by reference temperature"));
+        assertTrue(Files.readString(out.resolve("results.json")).contains("by reference temperature"));
+    }
+
+    @Test
     void unknownPolicyIsInvalidInput() {
         Run r = run("analyse", "demo/design.yaml", "--out", tmp.resolve("q").toString(), "--policy", "no-such");
         assertEquals(ExitCodes.INVALID_INPUT, r.status());

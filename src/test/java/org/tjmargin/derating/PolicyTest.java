@@ -106,6 +106,14 @@ class PolicyTest {
     }
 
     @Test
+    void limitsDescribeThemselvesInDisplayUnits() {
+        assertEquals("lower of (125.0 °C, Tj max − 40 K)", HIGH_REL_TJ.describe(true));
+        assertEquals("0.5", new Limit.Fixed(0.5).describe(false));
+        assertEquals("1.5", new Limit.Fixed(1.5).describe(false));
+        assertEquals("Tj max", new Limit.BelowTjMax(0).describe(true));
+    }
+
+    @Test
     void builtInMinimumIsAddedUnlessOverridden() {
         Policy p = new Policy("p", "", List.of(new Rule("tj-below-max", null, Measure.JUNCTION_TEMPERATURE, Bound.MAX,
                 new Limit.BelowTjMax(10), "mine")));
