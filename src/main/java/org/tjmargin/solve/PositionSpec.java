@@ -66,11 +66,40 @@ public record PositionSpec(String id, BreakdownPart part, SteadyThermalPath path
         return new PositionInstance(c, diode, circuit.at(c), f == 1.0 ? path : path.scaledBy(f));
     }
 
-    /** All notes of this position: the part's estimates, the mounting's, and the position's own. */
+    /** Relative disagreement above which the rating curve's implied resistance is flagged (1): 10 %, well beyond
+     * the rounding of printed slopes (6.67 mW/K for 1/150 W/K is 0.05 %) and within the spread of real parts. */
+    public static final double RATING_RESISTANCE_TOLERANCE = 0.10;
+
+    /** All notes of this position: the part's estimates, the mounting's, the rating check, and its own. */
     public List<String> allNotes() {
         List<String> all = new ArrayList<>(part.estimates());
         all.addAll(path.notes());
+        ratingResistanceNote().ifPresent(all::add);
         all.addAll(notes);
         return all;
+    }
+
+    /**
+     * The power rating curve implies a junction-to-reference resistance, {@code (T_zero − T_knee)/P_max}; where the
+     * reference is a lead or a case it should match the thermal data's junction-to-reference resistance. A
+     * disagreement means either the curve is not purely thermal (a datasheet may derate more steeply) or the
+     * thermal data belong to another mounting: the analysis reads the curve at the temperature the path computes,
+     * and says so.
+     */
+    public java.util.Optional<String> ratingResistanceNote() {
+        var curve = part.ratings().powerCurve();
+        if (curve.reference() != org.tjmargin.device.RatingReference.LEAD
+                && curve.reference() != org.tjmargin.device.RatingReference.CASE) {
+            return java.util.Optional.empty();
+        }
+        double implied = curve.impliedResistanceKPerW();
+        double path = this.path.rThetaJrKPerW();
+        if (implied > 0 && Math.abs(path - implied) > RATING_RESISTANCE_TOLERANCE * implied) {
+            return java.util.Optional.of(String.format(java.util.Locale.ROOT,
+                    "the rating curve implies %.1f K/W from junction to its reference point, the thermal path "
+                            + "%.1f K/W: they disagree by more than %.0f %%; check the part data", implied, path,
+                    100 * RATING_RESISTANCE_TOLERANCE));
+        }
+        return java.util.Optional.empty();
     }
 }
