@@ -32,13 +32,22 @@ public final class ElectroThermalSolver {
     public static ThermalOutcome solve(Circuit circuit, BreakdownDiode diode, SteadyThermalPath path, double tLocalK,
                                        SolverSettings settings) {
         final double rTheta = path.rThetaJaKPerW();
-        FixedPointOutcome outcome = LowestFixedPoint.find(
-                tj -> tLocalK + rTheta * circuit.at(diode, tj).diodePowerW(), tLocalK, settings);
+        // The last circuit point, so that the point at the root (usually the last one evaluated before the loop
+        // gain) is not solved again. Local to this call: the solver stays thread-safe.
+        final CircuitPoint[] last = new CircuitPoint[1];
+        final double[] lastTj = {Double.NaN};
+        FixedPointOutcome outcome = LowestFixedPoint.find(tj -> {
+            CircuitPoint cp = circuit.at(diode, tj);
+            last[0] = cp;
+            lastTj[0] = tj;
+            return tLocalK + rTheta * cp.diodePowerW();
+        }, tLocalK, settings);
         if (outcome instanceof FixedPointOutcome.Root r) {
-            CircuitPoint cp = circuit.at(diode, r.x());
+            boolean cached = lastTj[0] == r.x();
+            CircuitPoint cp = cached ? last[0] : circuit.at(diode, r.x());
             double refK = path.referenceTemperatureK(r.x(), cp.diodePowerW());
             return new ThermalOutcome.Converged(
-                    new OperatingPoint(r.x(), tLocalK, refK, cp, r.evaluations() + 1, r.loopGain(), r.residual()));
+                    new OperatingPoint(r.x(), tLocalK, refK, cp, r.evaluations() + (cached ? 0 : 1), r.loopGain(), r.residual()));
         }
         if (outcome instanceof FixedPointOutcome.Runaway) {
             return new ThermalOutcome.Runaway(tLocalK, settings.capK());

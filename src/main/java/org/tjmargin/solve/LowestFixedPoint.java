@@ -1,7 +1,8 @@
 package org.tjmargin.solve;
 
 import java.util.function.DoubleUnaryOperator;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.analysis.solvers.AllowedSolution;
+import org.apache.commons.math3.analysis.solvers.PegasusSolver;
 import org.apache.commons.math3.exception.MathIllegalStateException;
 
 /**
@@ -16,9 +17,11 @@ import org.apache.commons.math3.exception.MathIllegalStateException;
  *   through two points left of the lowest root crosses zero at or before that root (a concave function lies below
  *   its chords' extensions). The steps then climb monotonically onto the lowest root and never jump past a pair of
  *   roots to a higher one.</li>
- *   <li>If a step lands where {@code g ≥ 0}, the lowest root is bracketed and Brent's method finishes it
- *   (R. P. Brent, <i>Algorithms for Minimization without Derivatives</i>, 1973, ch. 4; the Commons Math
- *   {@link BrentSolver}).</li>
+ *   <li>If a step lands where {@code g ≥ 0}, the lowest root is bracketed and the Pegasus method finishes it
+ *   (M. Dowell and P. Jarratt, "The 'Pegasus' method for computing the root of an equation", BIT 12 (1972)
+ *   503–508; the Commons Math {@link PegasusSolver}): a bracketing secant method that keeps the bracket, converges
+ *   superlinearly, and stops on the residual, which is what the heat balance is held to. Brent's method, which
+ *   stops only when the bracket itself has shrunk to the tolerance, spent about twice the evaluations here.</li>
  * </ul>
  * Every step is capped at {@link SolverSettings#maxStepK()}, because when {@code P} first falls and later rises
  * with temperature (a regulator whose clamp-like leakage takes over when hot) one long step could land beyond a
@@ -26,7 +29,7 @@ import org.apache.commons.math3.exception.MathIllegalStateException;
  * geometrically (within the cap on each step) up to the search cap; no sign change below the cap means no fixed point there: runaway. Every search has an evaluation budget
  * and ends with a typed outcome.
  *
- * <p>Stateless and thread-safe: each call builds its own Brent solver.
+ * <p>Stateless and thread-safe: each call builds its own bracketing solver.
  */
 public final class LowestFixedPoint {
 
@@ -115,13 +118,12 @@ public final class LowestFixedPoint {
 
     private static FixedPointOutcome brent(DoubleUnaryOperator map, double lo, double hi, int evalsSoFar,
                                            SolverSettings settings, boolean loopGain) {
-        // The bracket is shrunk to 1 % of the tolerance (relative 1e-15, a few ulps at 300 K-scale values) because
-        // where g is steep (loop gain far below zero) the residual is the bracket times the slope; the function value
-        // accuracy is a tenth of the tolerance so that a flat g stops on the residual instead.
-        BrentSolver solver = new BrentSolver(1e-15, 0.01 * settings.toleranceK(), 0.1 * settings.toleranceK());
+        // Stops when |g| ≤ a tenth of the tolerance (the residual the balance is held to) or the bracket has shrunk
+        // to 1 % of it (relative 1e-15, a few ulps at 300 K-scale values), whichever comes first.
+        PegasusSolver solver = new PegasusSolver(1e-15, 0.01 * settings.toleranceK(), 0.1 * settings.toleranceK());
         int left = settings.maxEvaluations() - evalsSoFar;
         try {
-            double x = solver.solve(left, t -> t - map.applyAsDouble(t), lo, hi, 0.5 * (lo + hi));
+            double x = solver.solve(left, t -> t - map.applyAsDouble(t), lo, hi, AllowedSolution.ANY_SIDE);
             int evals = evalsSoFar + solver.getEvaluations();
             double g = x - map.applyAsDouble(x);
             if (!(Math.abs(g) <= ACCEPTED_RESIDUAL)) {
@@ -140,6 +142,8 @@ public final class LowestFixedPoint {
             return new FixedPointOutcome.Root(x, g, 0.0, evals);
         }
         double gain = (map.applyAsDouble(x + GAIN_STEP) - map.applyAsDouble(x - GAIN_STEP)) / (2 * GAIN_STEP);
-        return new FixedPointOutcome.Root(x, g, gain, evals + 2);
+        // Evaluate the root last, so a caller that remembers the last evaluation holds the root's own state.
+        map.applyAsDouble(x);
+        return new FixedPointOutcome.Root(x, g, gain, evals + 3);
     }
 }
