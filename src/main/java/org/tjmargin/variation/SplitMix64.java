@@ -46,10 +46,12 @@ public final class SplitMix64 {
     }
 
     /**
-     * A uniform double strictly inside (0, 1): the top 53 bits plus one half, times 2^−53, so that an inverse CDF
-     * never sees 0 or 1 (values {@code (k + ½)·2^−53}, {@code k = 0 … 2^53 − 1}).
+     * A uniform double strictly inside (0, 1): the top 52 bits {@code k} as {@code (k + ½)·2^−52}, so that an
+     * inverse CDF never sees 0 or 1. With 52 bits {@code k + ½} is exact (below 2^52 doubles are spaced by ½); with
+     * 53 bits the largest {@code k + ½} would round up to 2^53 and give exactly 1. Values
+     * {@code 2^−53 … 1 − 2^−53}, spaced 2^−52.
      */
     public double nextOpenUnit() {
-        return ((nextLong() >>> 11) + 0.5) * 0x1.0p-53;
+        return ((nextLong() >>> 12) + 0.5) * 0x1.0p-52;
     }
 }

@@ -118,6 +118,24 @@ class MonteCarloTest {
         assertEquals(one.tj().mean(), opOne.tj().mean(), 1e-9);
     }
 
+    /** A resistive load is outside the closed form: every sample goes to the general solver, and still agrees. */
+    @Test
+    void resistiveLoadUsesTheGeneralSolver() {
+        var r = VariationFixtures.regulator();
+        var c = (org.tjmargin.circuit.ShuntRegulatorSpec) r.circuit();
+        PositionSpec spec = new PositionSpec("D2", r.part(), r.path(), new org.tjmargin.circuit.ShuntRegulatorSpec(
+                c.supplyV(), c.resistor(), new org.tjmargin.circuit.LoadRange.Resistive(Range.between(800, 3000))),
+                r.vzShiftV(), r.rThetaFactor(), r.alphaVPerK(), List.of());
+        PointEvaluator ev = new PointEvaluator(spec, VariationFixtures.policy(), VariationFixtures.c(40),
+                SolverSettings.DEFAULT);
+        MonteCarloResult full = MonteCarlo.run(ev, VariationModel.UNIFORM, MonteCarloSettings.of(3000, 8L));
+        OperatingPointSpread op = MonteCarlo.operatingPoints(spec, VariationModel.UNIFORM, ev.tLocalK(),
+                MonteCarloSettings.of(3000, 8L), SolverSettings.DEFAULT);
+        assertEquals(0, full.fastPathSamples());
+        assertEquals(0, op.fastPathSamples());
+        assertEquals(full.tj(), op.tj());
+    }
+
     private static <T> T inPool(int threads, Supplier<T> task) throws Exception {
         ForkJoinPool pool = new ForkJoinPool(threads);
         try {
