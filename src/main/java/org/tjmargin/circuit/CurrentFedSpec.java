@@ -1,8 +1,10 @@
 package org.tjmargin.circuit;
 
 import java.util.EnumSet;
+import java.util.Optional;
 import java.util.Set;
 import org.tjmargin.variation.Axis;
+import org.tjmargin.variation.AxisValues;
 import org.tjmargin.variation.Corner;
 import org.tjmargin.variation.Range;
 
@@ -22,6 +24,16 @@ public record CurrentFedSpec(Range currentA) implements CircuitSpec {
     @Override
     public CurrentFedDiode at(Corner c) {
         return new CurrentFedDiode(c.valueOf(Axis.SUPPLY, currentA));
+    }
+
+    @Override
+    public CurrentFedDiode atValues(AxisValues v) {
+        return new CurrentFedDiode(v.valueOf(Axis.SUPPLY, currentA));
+    }
+
+    @Override
+    public Optional<Range> rangeOf(Axis axis) {
+        return axis == Axis.SUPPLY ? Optional.of(currentA) : Optional.empty();
     }
 
     @Override

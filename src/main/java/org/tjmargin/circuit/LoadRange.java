@@ -12,6 +12,12 @@ public sealed interface LoadRange permits LoadRange.Current, LoadRange.Resistive
     /** True when the load varies. */
     boolean varies();
 
+    /** The range of the LOAD axis in the load's own unit: current (A) or resistance (Ω). */
+    Range range();
+
+    /** The load at {@code value} of its {@link #range()} (A for a current load, Ω for a resistive one). */
+    Load atValue(double value);
+
     /**
      * A current load between {@code currentA.lo()} and {@code currentA.hi()}.
      *
@@ -32,6 +38,16 @@ public sealed interface LoadRange permits LoadRange.Current, LoadRange.Resistive
         @Override
         public boolean varies() {
             return currentA.varies();
+        }
+
+        @Override
+        public Range range() {
+            return currentA;
+        }
+
+        @Override
+        public Load atValue(double value) {
+            return new Load.Current(value);
         }
     }
 
@@ -60,6 +76,16 @@ public sealed interface LoadRange permits LoadRange.Current, LoadRange.Resistive
         @Override
         public boolean varies() {
             return ohm.varies();
+        }
+
+        @Override
+        public Range range() {
+            return ohm;
+        }
+
+        @Override
+        public Load atValue(double value) {
+            return new Load.Resistive(value);
         }
     }
 }

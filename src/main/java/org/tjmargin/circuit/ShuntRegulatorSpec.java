@@ -1,8 +1,10 @@
 package org.tjmargin.circuit;
 
 import java.util.EnumSet;
+import java.util.Optional;
 import java.util.Set;
 import org.tjmargin.variation.Axis;
+import org.tjmargin.variation.AxisValues;
 import org.tjmargin.variation.Corner;
 import org.tjmargin.variation.Range;
 
@@ -25,6 +27,22 @@ public record ShuntRegulatorSpec(Range supplyV, SeriesResistor resistor, LoadRan
     public ShuntRegulator at(Corner c) {
         return new ShuntRegulator(c.valueOf(Axis.SUPPLY, supplyV), c.valueOf(Axis.SERIES_RESISTOR, resistor.ohm()),
                 load.at(c.extreme(Axis.LOAD)));
+    }
+
+    @Override
+    public ShuntRegulator atValues(AxisValues v) {
+        return new ShuntRegulator(v.valueOf(Axis.SUPPLY, supplyV), v.valueOf(Axis.SERIES_RESISTOR, resistor.ohm()),
+                load.atValue(v.valueOf(Axis.LOAD, load.range())));
+    }
+
+    @Override
+    public Optional<Range> rangeOf(Axis axis) {
+        return switch (axis) {
+            case SUPPLY -> Optional.of(supplyV);
+            case SERIES_RESISTOR -> Optional.of(resistor.ohm());
+            case LOAD -> Optional.of(load.range());
+            default -> Optional.empty();
+        };
     }
 
     @Override

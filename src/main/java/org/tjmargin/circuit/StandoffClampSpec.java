@@ -1,8 +1,10 @@
 package org.tjmargin.circuit;
 
 import java.util.EnumSet;
+import java.util.Optional;
 import java.util.Set;
 import org.tjmargin.variation.Axis;
+import org.tjmargin.variation.AxisValues;
 import org.tjmargin.variation.Corner;
 import org.tjmargin.variation.Range;
 
@@ -24,6 +26,16 @@ public record StandoffClampSpec(Range lineV, double sourceOhm) implements Circui
     @Override
     public StandoffClamp at(Corner c) {
         return new StandoffClamp(c.valueOf(Axis.SUPPLY, lineV), sourceOhm);
+    }
+
+    @Override
+    public StandoffClamp atValues(AxisValues v) {
+        return new StandoffClamp(v.valueOf(Axis.SUPPLY, lineV), sourceOhm);
+    }
+
+    @Override
+    public Optional<Range> rangeOf(Axis axis) {
+        return axis == Axis.SUPPLY ? Optional.of(lineV) : Optional.empty();
     }
 
     @Override

@@ -1,0 +1,82 @@
+package org.tjmargin.variation.statistical;
+
+import java.util.List;
+import java.util.Optional;
+import org.tjmargin.derating.Policy;
+import org.tjmargin.derating.RuleCheck;
+import org.tjmargin.solve.OperatingPoint;
+import org.tjmargin.solve.PointStatus;
+import org.tjmargin.solve.PositionInstance;
+import org.tjmargin.solve.PositionSpec;
+import org.tjmargin.solve.SolverSettings;
+import org.tjmargin.solve.ThermalOutcome;
+import org.tjmargin.variation.AxisValues;
+
+/**
+ * Solves one position at any point of its input space in fixed local air and holds it against a policy: the one
+ * function that Monte Carlo, the root-sum-square spread and the tornado all evaluate. The closed form of
+ * {@link LinearFastPath} is used where its assumptions hold, the general solver elsewhere.
+ *
+ * @param spec     the position
+ * @param policy   the rules (at most 63, for the violation bit mask)
+ * @param tLocalK  local air temperature (K), e.g. the position's air at the worst-case board balance
+ * @param settings the junction solve's budgets and tolerances
+ */
+public record PointEvaluator(PositionSpec spec, Policy policy, double tLocalK, SolverSettings settings) {
+
+    public PointEvaluator {
+        if (spec == null || policy == null || settings == null) {
+            throw new IllegalArgumentException("a point evaluator needs a position, a policy and solver settings");
+        }
+        if (!(tLocalK > 0) || !Double.isFinite(tLocalK)) {
+            throw new IllegalArgumentException("local air temperature must be > 0 K and finite, got " + tLocalK);
+        }
+        if (policy.rules().size() > 63) {
+            throw new IllegalArgumentException("at most 63 rules per policy, got " + policy.rules().size());
+        }
+    }
+
+    /** The point at {@code values}. */
+    public Evaluation evaluate(AxisValues values) {
+        PositionInstance inst = spec.atValues(values);
+        Optional<OperatingPoint> fast = LinearFastPath.solve(inst, tLocalK, settings);
+        ThermalOutcome out = fast.<ThermalOutcome>map(ThermalOutcome.Converged::new)
+                .orElseGet(() -> inst.solve(tLocalK, settings));
+        List<RuleCheck> checks = policy.check(spec.ruleContext(inst, out, tLocalK));
+        double margin = 1.0;
+        String limiting = "none";
+        long violated = 0;
+        for (RuleCheck rc : checks) {
+            if (rc.margin() < margin || "none".equals(limiting)) {
+                margin = rc.margin();
+                limiting = rc.ruleId();
+            }
+            if (!rc.holds()) {
+                violated |= 1L << indexOf(rc.ruleId());
+            }
+        }
+        PointStatus status;
+        double tj;
+        if (out instanceof ThermalOutcome.Converged c) {
+            status = PointStatus.CONVERGED;
+            tj = c.point().tjK();
+        } else if (out instanceof ThermalOutcome.Runaway r) {
+            status = PointStatus.RUNAWAY;
+            tj = r.capK();
+        } else {
+            status = PointStatus.NOT_CONVERGED;
+            tj = ((ThermalOutcome.NotConverged) out).lastTjK();
+        }
+        return new Evaluation(status, tj, margin, limiting, violated, fast.isPresent());
+    }
+
+    private int indexOf(String ruleId) {
+        List<org.tjmargin.derating.Rule> rules = policy.rules();
+        for (int i = 0; i < rules.size(); i++) {
+            if (rules.get(i).id().equals(ruleId)) {
+                return i;
+            }
+        }
+        throw new IllegalStateException("rule " + ruleId + " is not in policy " + policy.name());
+    }
+}
