@@ -8,6 +8,7 @@ import org.tjmargin.circuit.ShuntRegulatorSpec;
 import org.tjmargin.derating.Policy;
 import org.tjmargin.derating.RuleCheck;
 import org.tjmargin.derating.RuleContext;
+import org.tjmargin.surge.SurgeResult;
 import org.tjmargin.thermal.Enclosure;
 
 /**
@@ -92,11 +93,13 @@ public final class BoardSolver {
             PositionInstance inst = instances.get(k);
             ThermalOutcome out = inst.solve(tLocalK, settings);
             RuleContext ctx;
+            List<SurgeResult> surges = List.of();
             double allowed = 0;
             if (out instanceof ThermalOutcome.Converged c) {
                 OperatingPoint p = c.point();
                 allowed = spec.part().ratings().powerCurve().allowedPowerAt(p.referenceK());
-                ctx = Measurements.of(spec, inst, p, allowed, resistorAllowed);
+                surges = SurgeChecks.at(spec, inst, p);
+                ctx = Measurements.of(spec, inst, p, allowed, resistorAllowed, surges);
                 if (!hottestRunaway && p.tjK() > hottestTj) {
                     hottestTj = p.tjK();
                     hottest = k;
@@ -123,7 +126,7 @@ public final class BoardSolver {
                     worst.put(rc.ruleId(), new WorstCheck(rc, k));
                 }
             }
-            corners.add(new CornerPoint(inst.corner(), out, allowed, resistorAllowed, checks));
+            corners.add(new CornerPoint(inst.corner(), out, allowed, resistorAllowed, checks, surges));
         }
         double margin = 1.0;
         String limiting = "none";
