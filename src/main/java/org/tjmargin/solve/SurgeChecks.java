@@ -19,8 +19,13 @@ import org.tjmargin.thermal.FosterPeakSearch;
  */
 final class SurgeChecks {
 
-    /** Transient settings of every surge: the surge package's defaults (tolerance 1e-4, 50 points per front). */
-    static final TransientSettings TRANSIENT = TransientSettings.defaults();
+    /**
+     * Transient settings of every surge: the surge package's defaults (50 points per front) with a local tolerance of
+     * 1e-3 instead of 1e-4: on the demo's surges the peak junction temperature moves by under 0.1 K and the rating
+     * ratio by under 1e-4 relative, while the steps halve (margins are shown to 0.1 %, and a surge runs at every
+     * corner of every ambient).
+     */
+    static final TransientSettings TRANSIENT = TransientSettings.defaults().withRelativeTolerance(1e-3);
     /** Peak search of the rating conversion: the thermal package's defaults. */
     static final FosterPeakSearch PEAK_SEARCH = FosterPeakSearch.defaults();
 
