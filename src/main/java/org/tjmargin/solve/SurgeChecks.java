@@ -16,6 +16,14 @@ import org.tjmargin.thermal.FosterPeakSearch;
  * corner's steady-state junction temperature, on the clamp line of that corner's diode (its breakdown voltage
  * shifted within tolerance, its temperature coefficient at the corner's value), with {@code Rd} from the part's
  * clamping voltage at the nominal breakdown line.
+ *
+ * <p>Which corners: a surge depends on a corner only through its clamp line (breakdown shift and temperature
+ * coefficient) and its start temperature; supply, load and thermal-resistance corners change only the start. For a
+ * fixed line every surge quantity grows with the start temperature (a hotter start derates the pulse rating and
+ * starts the same rise higher; with {@code αV ≥ 0} the clamp voltage rises too), so among the corners sharing a clamp
+ * line the hottest is the worst for every surge rule; with {@code αV < 0} the clamp voltage is highest at the
+ * coldest, which is evaluated as well (derived from the model of design 2.1 and 2.6). Surges run only at those
+ * corners; elsewhere the surge rules do not apply, which leaves every rule's worst corner unchanged.
  */
 final class SurgeChecks {
 
@@ -30,6 +38,40 @@ final class SurgeChecks {
     static final FosterPeakSearch PEAK_SEARCH = FosterPeakSearch.defaults();
 
     private SurgeChecks() {
+    }
+
+    /** The corners at which to run the position's surges (see the class comment). */
+    static boolean[] cornersToEvaluate(PositionSpec spec, List<PositionInstance> instances, List<ThermalOutcome> outcomes) {
+        boolean[] at = new boolean[instances.size()];
+        if (spec.surges().isEmpty()) {
+            return at;
+        }
+        java.util.Map<List<Double>, int[]> groups = new java.util.HashMap<>();
+        for (int k = 0; k < instances.size(); k++) {
+            if (!(outcomes.get(k) instanceof ThermalOutcome.Converged c)) {
+                continue;
+            }
+            var d = instances.get(k).diode();
+            int[] g = groups.computeIfAbsent(List.of(d.vz0At25V(), d.tc().alphaVPerK()), key -> new int[] {-1, -1});
+            double tj = c.point().tjK();
+            if (g[0] < 0 || tj > tjOf(outcomes.get(g[0]))) {
+                g[0] = k;
+            }
+            if (g[1] < 0 || tj < tjOf(outcomes.get(g[1]))) {
+                g[1] = k;
+            }
+        }
+        for (int[] g : groups.values()) {
+            at[g[0]] = true;
+            if (instances.get(g[1]).diode().tc().alphaVPerK() < 0) {
+                at[g[1]] = true;
+            }
+        }
+        return at;
+    }
+
+    private static double tjOf(ThermalOutcome o) {
+        return ((ThermalOutcome.Converged) o).point().tjK();
     }
 
     static List<SurgeResult> at(PositionSpec spec, PositionInstance inst, OperatingPoint p) {
