@@ -23,7 +23,8 @@ import org.tjmargin.thermal.FosterPeakSearch;
  * starts the same rise higher; with {@code αV ≥ 0} the clamp voltage rises too), so among the corners sharing a clamp
  * line the hottest is the worst for every surge rule; with {@code αV < 0} the clamp voltage is highest at the
  * coldest, which is evaluated as well (derived from the model of design 2.1 and 2.6). Surges run only at those
- * corners; elsewhere the surge rules do not apply, which leaves every rule's worst corner unchanged.
+ * corners; elsewhere the surge rules do not apply, which leaves every rule's worst value unchanged (to within the
+ * transient's numerical tolerance where corners start a few micro-kelvin apart; the tests hold it to 1e-6).
  */
 final class SurgeChecks {
 
