@@ -60,6 +60,33 @@ class SurgeChecksTest {
     }
 
     @Test
+    void aNegativeCoefficientAlsoRunsTheColdestCornerOfEachLine() {
+        // With αV < 0 the clamp voltage is highest at the coldest start (design 2.1): that corner joins the hottest.
+        Board board = DesignLoader.load(Path.of("demo/design.yaml")).board();
+        PositionSpec d4 = board.positions().get(3);
+        PositionSpec negative = new PositionSpec(d4.id(), d4.part(), d4.path(), d4.circuit(), d4.vzShiftV(), d4.rThetaFactor(),
+                org.tjmargin.variation.Range.exact(-0.01), d4.notes(), d4.surges());
+        List<PositionInstance> instances = negative.corners().stream().map(negative::at).toList();
+        List<ThermalOutcome> outcomes = instances.stream().map(i -> i.solve(330, SolverSettings.DEFAULT)).toList();
+        boolean[] chosen = SurgeChecks.cornersToEvaluate(negative, instances, outcomes);
+        double all = 0;
+        double sel = 0;
+        int count = 0;
+        for (int c = 0; c < instances.size(); c++) {
+            OperatingPoint p = ((ThermalOutcome.Converged) outcomes.get(c)).point();
+            double v = SurgeChecks.at(negative, instances.get(c), p).stream().mapToDouble(r -> r.peakClampVoltageV()).max()
+                    .orElseThrow();
+            all = Math.max(all, v);
+            if (chosen[c]) {
+                sel = Math.max(sel, v);
+                count++;
+            }
+        }
+        assertEquals(4, count);
+        assertEquals(all, sel, 1e-6 * all);
+    }
+
+    @Test
     void positionsWithoutSurgesRunNone() {
         Board board = DesignLoader.load(Path.of("demo/design.yaml")).board();
         PositionAtAmbient d3 = BoardSolver.evaluate(board.positions().get(2), PreparedBoard.of(board).instances().get(2),
