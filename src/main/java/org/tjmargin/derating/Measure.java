@@ -16,7 +16,16 @@ public enum Measure {
     /** Series-resistor power over its derated rating at its ambient (1). */
     RESISTOR_POWER_RATIO("resistor power / derated rating", "1", false),
     /** Line voltage over the clamp's working standoff voltage {@code Vwm} (1). */
-    STANDOFF_RATIO("line voltage / standoff voltage", "1", false);
+    STANDOFF_RATIO("line voltage / standoff voltage", "1", false),
+    /** Highest junction temperature during a position's surges, started from the steady state (K). */
+    SURGE_JUNCTION_TEMPERATURE("surge peak junction temperature", "K", true),
+    /**
+     * Largest ratio over a position's surges of the clamp's peak pulse power to its pulse rating converted to the
+     * applied pulse and derated to the start temperature (1).
+     */
+    SURGE_POWER_RATIO("surge peak power / derated pulse rating", "1", false),
+    /** Largest ratio over a position's surges of the peak clamp voltage to the protected input's limit (1). */
+    CLAMP_VOLTAGE_RATIO("surge clamp voltage / protected input limit", "1", false);
 
     private final String description;
     private final String unit;
@@ -51,6 +60,11 @@ public enum Measure {
     /** SI unit of the values ({@code 1} for ratios). */
     public String unit() {
         return unit;
+    }
+
+    /** True for the quantities of surges (design 2.6). */
+    public boolean isSurge() {
+        return this == SURGE_JUNCTION_TEMPERATURE || this == SURGE_POWER_RATIO || this == CLAMP_VOLTAGE_RATIO;
     }
 
     /** True for temperatures, whose margins are taken on the rise above 25 °C. */

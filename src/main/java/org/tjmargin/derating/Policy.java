@@ -25,15 +25,25 @@ public record Policy(String name, String provenance, List<Rule> rules) {
 
     /**
      * The built-in minimum every design must meet whatever its policy: the junction below the part's Tj max, and a
-     * regulating diode's current at or above its knee. Physics, not policy: above Tj max the part is outside its
-     * absolute rating, below {@code Izk} it no longer regulates (design 2.1).
+     * regulating diode's current at or above its knee; for surges, the junction below Tj max, the peak pulse power
+     * within the derated pulse rating, and the clamp voltage within the protected input's limit. Physics, not
+     * policy: above Tj max or its pulse rating the part is outside its absolute rating, below {@code Izk} it no
+     * longer regulates (design 2.1), above its limit the protected input is outside its own.
      */
     public static Policy builtInMinimum() {
         return new Policy("built-in minimum", "absolute ratings of the part", List.of(
                 new Rule("tj-below-max", "junction below Tj max", Measure.JUNCTION_TEMPERATURE, Bound.MAX,
                         new Limit.BelowTjMax(0), "absolute maximum rating of the part"),
                 new Rule("iz-above-knee", "Zener current at or above Izk", Measure.KNEE_CURRENT_RATIO, Bound.MIN,
-                        new Limit.Fixed(1.0), "definition of the breakdown region (knee current)")));
+                        new Limit.Fixed(1.0), "definition of the breakdown region (knee current)"),
+                new Rule("surge-tj-below-max", "surge peak junction below Tj max", Measure.SURGE_JUNCTION_TEMPERATURE,
+                        Bound.MAX, new Limit.BelowTjMax(0), "absolute maximum rating of the part"),
+                new Rule("surge-within-rating", "surge peak power within the derated pulse rating", Measure.SURGE_POWER_RATIO,
+                        Bound.MAX, new Limit.Fixed(1.0), "absolute pulse rating of the part, derated linearly to zero at "
+                        + "Tj max from 25 °C (reference 4.6, TVS pulse-derating curves)"),
+                new Rule("clamp-within-protected-limit", "surge clamp voltage within the protected input's limit",
+                        Measure.CLAMP_VOLTAGE_RATIO, Bound.MAX, new Limit.Fixed(1.0),
+                        "absolute maximum rating of the protected input, as the design states it")));
     }
 
     /**

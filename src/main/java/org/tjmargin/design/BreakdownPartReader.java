@@ -17,7 +17,7 @@ import org.tjmargin.units.Quantities;
 final class BreakdownPartReader {
 
     private static final Set<String> KEYS = Set.of("id", "kind", "breakdown", "leakage", "ratings", "package",
-            "clamp");
+            "clamp", "surge");
     private static final Set<String> CLAMP_KEYS = Set.of("standoff");
 
     private BreakdownPartReader() {
@@ -66,10 +66,15 @@ final class BreakdownPartReader {
             izmA = r.power().si() / b.vzNomV();
             notes.add("maximum current not given: taken as power / Vz = " + Quantities.format(izmA, Dimension.CURRENT));
         }
+        Optional<SurgePartSpec> surge = f.has("surge")
+                ? SurgePartReader.read(f, r.tjMaxK(), b.model().vz0At25V()) : Optional.empty();
+        if (f.has("surge") && surge.isEmpty()) {
+            return Optional.empty();
+        }
         Optional<DiodeRatings> dr = f.build(() -> new DiodeRatings(r.tjMaxK(), r.curve(), izmA));
         return dr.flatMap(d -> f.build(() -> new BreakdownPart(id.get(), kind.get(), b.vzNomV(), b.tolerance(),
                 b.model(), d, standoff.map(Value::si).orElse(0.0), notes)))
-                .map(part -> new LibraryPart(part, pkg.get()));
+                .map(part -> new LibraryPart(part, pkg.get(), surge));
     }
 
     private static Optional<BreakdownPart.Kind> kind(Fields f) {

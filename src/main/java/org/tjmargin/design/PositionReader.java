@@ -8,6 +8,9 @@ import org.tjmargin.circuit.CircuitSpec;
 import org.tjmargin.device.BreakdownPart;
 import org.tjmargin.device.TemperatureCoefficient;
 import org.tjmargin.solve.PositionSpec;
+import org.tjmargin.surge.PositionSurges;
+import org.tjmargin.surge.SurgeCase;
+import org.tjmargin.surge.SurgeRating;
 import org.tjmargin.thermal.SteadyThermalPath;
 import org.tjmargin.variation.Range;
 
@@ -21,7 +24,7 @@ import org.tjmargin.variation.Range;
  */
 final class PositionReader {
 
-    private static final Set<String> KEYS = Set.of("id", "part", "mounting", "circuit", "tolerances");
+    private static final Set<String> KEYS = Set.of("id", "part", "mounting", "circuit", "tolerances", "surges");
     private static final Set<String> TOLERANCE_KEYS = Set.of("thermal-resistance", "vz", "temperature-coefficient");
 
     private PositionReader() {
@@ -51,16 +54,34 @@ final class PositionReader {
             RangeReader.read(tol.get(), "temperature-coefficient", Need.REQUIRED,
                     (c, n, p) -> BreakdownReader.coefficient(c, n, p, 1.0), Sign.ANY);
         }
-        if (!Fields.present(id, part, thermal, circuit, alpha) || !tolOk) {
+        Optional<List<SurgeCase>> surges = f.has("surges") ? SurgeCaseReader.read(f) : Optional.empty();
+        if (!Fields.present(id, part, thermal, circuit, alpha) || !tolOk || (f.has("surges") && surges.isEmpty())) {
             return Optional.empty();
         }
+        Optional<PositionSurges> withRating = Optional.empty();
+        if (surges.isPresent()) {
+            if (part.get().surge().isEmpty()) {
+                f.report(InputProblem.Kind.INCONSISTENT, "surges", "part '" + part.get().part().id()
+                        + "' has no surge data: give the part a 'surge' object to check surges");
+                return Optional.empty();
+            }
+            Optional<SurgeRating> rating = SurgeMapping.rating(f, part.get().surge().get(), thermal.get());
+            if (rating.isEmpty()) {
+                return Optional.empty();
+            }
+            withRating = f.build(() -> new PositionSurges(rating.get(), surges.get()));
+            if (withRating.isEmpty()) {
+                return Optional.empty();
+            }
+        }
+        Optional<PositionSurges> positionSurges = withRating;
         BreakdownPart bp = part.get().part();
         double vzTolerance = vzTol.map(Value::si).orElse(bp.vzTolerance());
         double shift = vzTolerance * bp.vzNomV();
         Range rThetaFactor = Range.relative(1.0, rTheta.map(Value::si).orElse(0.0));
         List<String> notes = new ArrayList<>();
         return f.build(() -> new PositionSpec(id.get(), bp, thermal.get(), circuit.get(), new Range(-shift, 0, shift),
-                rThetaFactor, alpha.get(), notes));
+                rThetaFactor, alpha.get(), notes, positionSurges));
     }
 
     /** The coefficient's range at this position: the tolerances' override, else the part's own. */

@@ -81,6 +81,10 @@ public final class Cautions {
                     + "fault clears before tracks, the clamp or the series resistor overheat, while normal surges "
                     + "(their I²t) pass. The part alone cannot be called fail-safe.");
         }
+        List<String> surged = r.board().positions().stream().filter(s -> s.surges().isPresent()).map(PositionSpec::id).toList();
+        if (!surged.isEmpty()) {
+            out.add("Surges (" + String.join(", ", surged) + "): " + org.tjmargin.surge.SurgeResult.THERMAL_MODEL_CAUTION);
+        }
         if (highVoltage) {
             out.add("Mains or high-energy input: a supply or line of " + (int) HIGH_VOLTAGE_V + " V or more is in "
                     + "this design. Work on it only de-energised, follow the product safety standard for insulation, "

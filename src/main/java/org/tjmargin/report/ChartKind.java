@@ -9,7 +9,11 @@ public enum ChartKind {
     /** The diode's power rating curve with its operating points. */
     RATING("rating", "Diode power rating and operating points"),
     /** The series resistor's power rating curve with its operating points (shunt regulators only). */
-    RESISTOR("resistor", "Series resistor rating and operating points");
+    RESISTOR("resistor", "Series resistor rating and operating points"),
+    /** Junction temperature, clamp current and clamp voltage during each surge (positions with surges only). */
+    SURGE("surge", "Tj, current and clamp voltage during each surge, at its worst corner at the design's highest ambient"),
+    /** Margin of every surge rule against ambient (positions with surges only). */
+    SURGE_MARGIN("surge-margin", "Surge margin against ambient");
 
     private final String suffix;
     private final String caption;

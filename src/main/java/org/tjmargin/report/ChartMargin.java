@@ -38,12 +38,24 @@ final class ChartMargin {
     }
 
     static JFreeChart build(AnalysisResult result, int index) {
+        return build(result, index, false);
+    }
+
+    /** The margin of the surge rules only (design 2.6: surge margin against ambient). */
+    static JFreeChart buildSurge(AnalysisResult result, int index) {
+        return build(result, index, true);
+    }
+
+    private static JFreeChart build(AnalysisResult result, int index, boolean surgeOnly) {
         PositionResult pr = result.positions().get(index);
         List<PositionAtAmbient> sweep = ChartData.sweepOf(result, index);
         XYSeriesCollection data = new XYSeriesCollection();
         double lo = 0;
         double hi = 0;
         for (Rule rule : result.policy().rules()) {
+            if (surgeOnly && !rule.measure().isSurge()) {
+                continue;
+            }
             XYSeries s = ChartData.series(rule.id() + ": " + rule.title());
             boolean any = false;
             for (PositionAtAmbient p : sweep) {
@@ -113,10 +125,14 @@ final class ChartMargin {
                     Layer.FOREGROUND);
         }
         subtitles.add("Each rule at its worst corner at each ambient; a rule holds where its margin is ≥ 0.");
+        if (surgeOnly) {
+            subtitles.add("Thermal-model estimate: measured surge limits fall below thermal predictions (current crowding).");
+        }
         if (clipped) {
             subtitles.add("Vertical axis limited to ±" + (int) AXIS_LIMIT_PERCENT
                     + " %; lines leaving it continue beyond.");
         }
-        return ChartStyle.chart(pr.id() + " — margin against ambient", subtitles, plot);
+        return ChartStyle.chart(pr.id() + (surgeOnly ? " — surge margin against ambient" : " — margin against ambient"),
+                subtitles, plot);
     }
 }

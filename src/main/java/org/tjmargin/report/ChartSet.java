@@ -10,7 +10,8 @@ import org.tjmargin.solve.PositionSpec;
 /**
  * Every chart of an analysis, drawn as PNG and SVG, in board order and per position in the order of
  * {@link ChartKind}: {@code <position>-margin}, {@code -operating}, {@code -rating} and, for shunt regulators,
- * {@code -resistor} (names from {@link ChartNames}). Nothing is written to disk here.
+ * {@code -resistor}, and for positions with surges {@code -surge} and {@code -surge-margin} (names from
+ * {@link ChartNames}). Nothing is written to disk here.
  *
  * <p>The charts read the analysis only; none recomputes a physical quantity. Headless: set
  * {@code java.awt.headless=true} in a process without a display. Stateless and thread-safe.
@@ -53,6 +54,10 @@ public final class ChartSet {
         if (ChartResistorRating.applies(spec)) {
             kinds.add(ChartKind.RESISTOR);
         }
+        if (spec.surges().isPresent()) {
+            kinds.add(ChartKind.SURGE);
+            kinds.add(ChartKind.SURGE_MARGIN);
+        }
         return List.copyOf(kinds);
     }
 
@@ -64,6 +69,8 @@ public final class ChartSet {
     public static JFreeChart build(AnalysisResult result, int positionIndex, ChartKind kind) {
         return switch (kind) {
             case MARGIN -> ChartMargin.build(result, positionIndex);
+            case SURGE -> ChartSurge.build(result, positionIndex);
+            case SURGE_MARGIN -> ChartMargin.buildSurge(result, positionIndex);
             case OPERATING -> ChartOperatingPoint.build(result, positionIndex);
             case RATING -> ChartDeviceRating.build(result, positionIndex);
             case RESISTOR -> ChartResistorRating.build(result, positionIndex);

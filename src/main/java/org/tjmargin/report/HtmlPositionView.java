@@ -93,7 +93,8 @@ final class HtmlPositionView {
                 "Over the whole range the smallest margin is " + HtmlFormat.margin(pr.worstMargin()) + " (rule "
                         + pr.limitingRuleId() + ") at " + HtmlFormat.temperature(pr.worstAmbientK()) + " ambient.",
                 pr.regulation().map(r -> new HtmlView.Facts(regulationFacts(r))).orElse(null),
-                pr.runaway().map(o -> new HtmlView.Text(runawayText(o))).orElse(null), charts);
+                pr.runaway().map(o -> new HtmlView.Text(runawayText(o))).orElse(null), charts,
+                HtmlSurgeView.of(result, spec, atMax).orElse(null));
     }
 
     /** The worst margin; a runaway position's comes from the search cap, and says so. */

@@ -43,12 +43,23 @@ final class HtmlView {
     record Position(String id, String anchor, Badge verdict, String summary, List<Fact> part, List<Fact> mounting,
                     List<Fact> circuit, List<String> estimates, List<String> assumptions, String cornersCaption,
                     List<CornerRow> corners, boolean hasResistor, String marginsCaption, List<MarginRow> margins,
-                    String worstOverRange, Facts regulation, Text runaway, List<Chart> charts) {
+                    String worstOverRange, Facts regulation, Text runaway, List<Chart> charts, Surges surges) {
 
         /** True when there is a chart to place. */
         boolean hasCharts() {
             return !charts.isEmpty();
         }
+    }
+
+    /**
+     * The surges of a position ({@code null} without surges): the position's surge verdict at the design's highest
+     * ambient, the thermal-model caution that goes with it, and one block per surge.
+     */
+    record Surges(Badge verdict, String verdictText, String caution, List<Surge> surges) {
+    }
+
+    /** One surge: its test and its result at its worst corner at the design's highest ambient. */
+    record Surge(String id, String description, List<Fact> facts) {
     }
 
     /** A group of facts that may be absent as a whole ({@code null}). */

@@ -1,11 +1,11 @@
 package org.tjmargin.report;
 
+import java.util.Optional;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import org.tjmargin.derating.Measure;
 import org.tjmargin.derating.Rule;
 import org.tjmargin.derating.RuleCheck;
 import org.tjmargin.solve.AnalysisResult;
@@ -17,6 +17,10 @@ import org.tjmargin.solve.PositionResult;
 import org.tjmargin.solve.PositionSpec;
 import org.tjmargin.solve.ThermalOutcome;
 import org.tjmargin.solve.WorstCheck;
+import org.tjmargin.surge.PositionSurges;
+import org.tjmargin.surge.SurgeCase;
+import org.tjmargin.surge.SurgeRating;
+import org.tjmargin.surge.SurgeResult;
 
 /**
  * {@code results.json} (design section 4): per position the identifier, verdict, limiting rule, maximum ambient and,
@@ -119,11 +123,94 @@ public final class ResultsJson {
         for (CornerPoint c : r.atMaximumAmbient().positions().get(i).corners()) {
             corners.add(corner(c));
         }
+        o.set("surges", surges(r, i));
         return o;
     }
 
+    /**
+     * Every surge of the position: its test, and its result at the worst corner at the design's highest ambient,
+     * with the thermal-model caution (reference 3.3) beside each verdict.
+     */
+    private static ArrayNode surges(AnalysisResult r, int i) {
+        ArrayNode out = MAPPER.createArrayNode();
+        PositionSpec spec = r.board().positions().get(i);
+        if (spec.surges().isEmpty()) {
+            return out;
+        }
+        PositionSurges ps = spec.surges().get();
+        SurgeRating rating = ps.rating();
+        PositionAtAmbient hot = r.atMaximumAmbient().positions().get(i);
+        for (SurgeCase c : ps.cases()) {
+            ObjectNode s = out.addObject();
+            s.put("id", c.id());
+            s.put("description", c.description());
+            s.put("pulseCount", c.pulseCount());
+            if (c.pulseCount() > 1) {
+                s.put("periodS", c.periodS());
+            } else {
+                s.putNull("periodS");
+            }
+            if (c.protectedLimitV().isPresent()) {
+                s.put("protectedLimitV", c.protectedLimitV().getAsDouble());
+            } else {
+                s.putNull("protectedLimitV");
+            }
+            s.put("ratedPeakPowerW", rating.ratedPeakPowerW());
+            s.put("ratedPulseHalfValueS", rating.ratedPulse().widthS());
+            s.put("pulseTjMaxC", Labels.celsius(rating.pulseTjMaxK()));
+            s.put("thermalNetwork", rating.networkSource().name());
+            Optional<CornerPoint> worst = hot.worstCornerForSurge(c.id(), spec.part().ratings().tjMaxK());
+            if (worst.isPresent()) {
+                SurgeResult sr = worst.get().surge(c.id()).orElseThrow();
+                ObjectNode w = s.putObject("atMaxAmbient");
+                w.put("ambientC", Labels.celsius(hot.ambientK()));
+                w.put("corner", worst.get().corner().label());
+                surgeResult(w, sr);
+            } else {
+                s.putNull("atMaxAmbient");
+            }
+            s.put("caution", SurgeResult.THERMAL_MODEL_CAUTION);
+        }
+        return out;
+    }
+
+    private static void surgeResult(ObjectNode w, SurgeResult sr) {
+        w.put("startTjC", Labels.celsius(sr.startTjK()));
+        w.put("peakTjC", Labels.celsius(sr.peakJunctionTemperatureK()));
+        w.put("peakTjTimeS", sr.pulse().peakJunctionTimeS());
+        w.put("peakCurrentA", sr.peakCurrentA());
+        w.put("peakClampVoltageV", sr.peakClampVoltageV());
+        w.put("peakPowerW", sr.peakPowerW());
+        w.put("energyJ", sr.energyJ());
+        w.put("chargeC", sr.pulse().chargeC());
+        w.put("actionIntegralA2s", sr.pulse().actionIntegralA2s());
+        if (sr.pulseCount() > 1) {
+            w.put("averagePowerW", sr.averagePowerW());
+        } else {
+            w.putNull("averagePowerW");
+        }
+        w.put("convertedRatingW", sr.rating().peakPowerW());
+        w.put("conversionMethod", sr.rating().method().name());
+        w.put("appliedPulseHalfValueS", sr.rating().appliedPulse().widthS());
+        w.put("deratingFactor", sr.deratingFactor());
+        w.put("allowedPeakPowerW", sr.allowedPeakPowerW());
+        w.put("powerRatio", sr.powerRatio());
+        if (sr.clampVoltageRatio().isPresent()) {
+            w.put("clampVoltageRatio", sr.clampVoltageRatio().getAsDouble());
+        } else {
+            w.putNull("clampVoltageRatio");
+        }
+        w.put("estimated", sr.estimated());
+        w.put("steps", sr.pulse().steps());
+        if (sr.stopped().isPresent()) {
+            w.put("stopped", sr.stopped().get().name());
+        } else {
+            w.putNull("stopped");
+        }
+    }
+
     private static ObjectNode check(RuleCheck c, String corner) {
-        boolean t = c.measure() == Measure.JUNCTION_TEMPERATURE;
+        boolean t = c.measure().isTemperature();
         ObjectNode o = MAPPER.createObjectNode();
         o.put("rule", c.ruleId());
         o.put("measure", c.measure().name());
@@ -158,6 +245,13 @@ public final class ResultsJson {
             o.put("iterations", p.evaluations());
             o.put("loopGain", p.loopGain());
             o.put("residualK", p.residualK());
+            if (!c.surges().isEmpty()) {
+                ArrayNode surges = o.putArray("surges");
+                for (SurgeResult sr : c.surges()) {
+                    ObjectNode so = surges.addObject().put("id", sr.caseId());
+                    surgeResult(so, sr);
+                }
+            }
         } else if (c.outcome() instanceof ThermalOutcome.NotConverged n) {
             o.put("lastTjC", Labels.celsius(n.lastTjK()));
             o.put("residualK", n.residualK());

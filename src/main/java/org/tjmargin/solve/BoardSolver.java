@@ -8,6 +8,7 @@ import org.tjmargin.circuit.ShuntRegulatorSpec;
 import org.tjmargin.derating.Policy;
 import org.tjmargin.derating.RuleCheck;
 import org.tjmargin.derating.RuleContext;
+import org.tjmargin.surge.SurgeResult;
 import org.tjmargin.thermal.Enclosure;
 
 /**
@@ -88,15 +89,22 @@ public final class BoardSolver {
         Map<String, WorstCheck> worst = new LinkedHashMap<>();
         double resistorAllowed = spec.circuit() instanceof ShuntRegulatorSpec s
                 ? s.resistor().rating().allowedPowerAt(tLocalK) : 0.0;
+        List<ThermalOutcome> outcomes = new ArrayList<>(instances.size());
+        for (PositionInstance inst : instances) {
+            outcomes.add(inst.solve(tLocalK, settings));
+        }
+        boolean[] surgeAt = SurgeChecks.cornersToEvaluate(spec, instances, outcomes);
         for (int k = 0; k < instances.size(); k++) {
             PositionInstance inst = instances.get(k);
-            ThermalOutcome out = inst.solve(tLocalK, settings);
+            ThermalOutcome out = outcomes.get(k);
             RuleContext ctx;
+            List<SurgeResult> surges = List.of();
             double allowed = 0;
             if (out instanceof ThermalOutcome.Converged c) {
                 OperatingPoint p = c.point();
                 allowed = spec.part().ratings().powerCurve().allowedPowerAt(p.referenceK());
-                ctx = Measurements.of(spec, inst, p, allowed, resistorAllowed);
+                surges = surgeAt[k] ? SurgeChecks.at(spec, inst, p) : List.of();
+                ctx = Measurements.of(spec, inst, p, allowed, resistorAllowed, surges);
                 if (!hottestRunaway && p.tjK() > hottestTj) {
                     hottestTj = p.tjK();
                     hottest = k;
@@ -123,7 +131,7 @@ public final class BoardSolver {
                     worst.put(rc.ruleId(), new WorstCheck(rc, k));
                 }
             }
-            corners.add(new CornerPoint(inst.corner(), out, allowed, resistorAllowed, checks));
+            corners.add(new CornerPoint(inst.corner(), out, allowed, resistorAllowed, checks, surges));
         }
         double margin = 1.0;
         String limiting = "none";

@@ -3,6 +3,7 @@ package org.tjmargin.solve;
 import java.util.List;
 import java.util.Optional;
 import org.tjmargin.derating.RuleCheck;
+import org.tjmargin.surge.SurgeResult;
 import org.tjmargin.variation.Corner;
 
 /**
@@ -13,12 +14,26 @@ import org.tjmargin.variation.Corner;
  * @param allowedPowerW   the device rating read at the reference point's temperature (W); 0 when not converged
  * @param resistorAllowedW the series resistor's derated rating at the local air (W); 0 without a resistor
  * @param checks          the policy's applicable rules at this corner
+ * @param surges          each of the position's surges started from this corner's steady state, in the design's
+ *                        order; empty without surges or without a converged point
  */
 public record CornerPoint(Corner corner, ThermalOutcome outcome, double allowedPowerW, double resistorAllowedW,
-                          List<RuleCheck> checks) {
+                          List<RuleCheck> checks, List<SurgeResult> surges) {
+
+    /** A corner without surges. */
+    public CornerPoint(Corner corner, ThermalOutcome outcome, double allowedPowerW, double resistorAllowedW,
+                       List<RuleCheck> checks) {
+        this(corner, outcome, allowedPowerW, resistorAllowedW, checks, List.of());
+    }
 
     public CornerPoint {
         checks = List.copyOf(checks);
+        surges = List.copyOf(surges);
+    }
+
+    /** The result of surge {@code caseId} at this corner, if evaluated. */
+    public Optional<SurgeResult> surge(String caseId) {
+        return surges.stream().filter(s -> s.caseId().equals(caseId)).findFirst();
     }
 
     /** The converged point, if any. */

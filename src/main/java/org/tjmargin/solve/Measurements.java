@@ -1,11 +1,13 @@
 package org.tjmargin.solve;
 
 import java.util.EnumMap;
+import java.util.List;
 import java.util.Map;
 import org.tjmargin.circuit.ShuntRegulatorSpec;
 import org.tjmargin.circuit.StandoffClamp;
 import org.tjmargin.derating.Measure;
 import org.tjmargin.derating.RuleContext;
+import org.tjmargin.surge.SurgeResult;
 
 /**
  * The quantities derating rules see, read off an operating point: the one place that maps solver results to
@@ -22,6 +24,15 @@ final class Measurements {
 
     static RuleContext of(PositionSpec spec, PositionInstance inst, OperatingPoint p, double allowedW,
                           double resistorAllowedW) {
+        return of(spec, inst, p, allowedW, resistorAllowedW, List.of());
+    }
+
+    /**
+     * As above, with the position's surges at this point: each surge quantity is the worst over the surges (the
+     * largest), since a rule holds for the position only if it holds for every surge.
+     */
+    static RuleContext of(PositionSpec spec, PositionInstance inst, OperatingPoint p, double allowedW,
+                          double resistorAllowedW, List<SurgeResult> surges) {
         Map<Measure, Double> v = new EnumMap<>(Measure.class);
         v.put(Measure.JUNCTION_TEMPERATURE, p.tjK());
         v.put(Measure.POWER_RATIO, ratio(p.diodePowerW(), allowedW));
@@ -35,6 +46,11 @@ final class Measurements {
         }
         if (inst.circuit() instanceof StandoffClamp c && spec.part().standoffV() > 0) {
             v.put(Measure.STANDOFF_RATIO, c.lineV() / spec.part().standoffV());
+        }
+        for (SurgeResult s : surges) {
+            v.merge(Measure.SURGE_JUNCTION_TEMPERATURE, s.peakJunctionTemperatureK(), Math::max);
+            v.merge(Measure.SURGE_POWER_RATIO, s.powerRatio(), Math::max);
+            s.clampVoltageRatio().ifPresent(r -> v.merge(Measure.CLAMP_VOLTAGE_RATIO, r, Math::max));
         }
         return new RuleContext(v, spec.part().ratings().tjMaxK(), p.referenceK(), p.tLocalK());
     }

@@ -2,6 +2,8 @@ package org.tjmargin.solve;
 
 import java.util.List;
 import java.util.Optional;
+import org.tjmargin.derating.Rule;
+import org.tjmargin.surge.SurgeResult;
 
 /**
  * One position at one ambient: every corner, the hottest and the least-current corners, each rule at its worst
@@ -35,6 +37,29 @@ public record PositionAtAmbient(String positionId, double ambientK, double tLoca
     /** The corner with the least diode current. */
     public Optional<CornerPoint> leastCurrent() {
         return leastCurrentIndex < 0 ? Optional.empty() : Optional.of(corners.get(leastCurrentIndex));
+    }
+
+    /**
+     * The corner where surge {@code caseId} comes closest to its limits: the largest of its power ratio and its
+     * junction rise over the rise to Tj max (design 2.6); empty when no corner evaluated it.
+     *
+     * @param tjMaxK the part's maximum junction temperature (K)
+     */
+    public Optional<CornerPoint> worstCornerForSurge(String caseId, double tjMaxK) {
+        CornerPoint worst = null;
+        double worstScore = Double.NEGATIVE_INFINITY;
+        for (CornerPoint c : corners) {
+            Optional<SurgeResult> s = c.surge(caseId);
+            if (s.isPresent()) {
+                double score = Math.max(s.get().powerRatio(), (s.get().peakJunctionTemperatureK() - Rule.TEMPERATURE_MARGIN_ORIGIN_K)
+                        / (tjMaxK - Rule.TEMPERATURE_MARGIN_ORIGIN_K));
+                if (score > worstScore) {
+                    worstScore = score;
+                    worst = c;
+                }
+            }
+        }
+        return Optional.ofNullable(worst);
     }
 
     /** True when every rule holds at every corner and nothing ran away. */

@@ -9,6 +9,7 @@ import org.tjmargin.circuit.CircuitSpec;
 import org.tjmargin.circuit.ShuntRegulatorSpec;
 import org.tjmargin.derating.RuleContext;
 import org.tjmargin.device.BreakdownPart;
+import org.tjmargin.surge.PositionSurges;
 import org.tjmargin.thermal.SteadyThermalPath;
 import org.tjmargin.variation.Axis;
 import org.tjmargin.variation.AxisValues;
@@ -27,12 +28,20 @@ import org.tjmargin.variation.Range;
  * @param rThetaFactor     factor on every thermal resistance within its tolerance (1), nominal 1
  * @param alphaVPerK       the temperature coefficient's range (V/K)
  * @param notes            notes on estimated values (part and mounting), shown in every output
+ * @param surges           the surges the position must withstand, with the part's surge data; none by default
  */
 public record PositionSpec(String id, BreakdownPart part, SteadyThermalPath path, CircuitSpec circuit, Range vzShiftV,
-                           Range rThetaFactor, Range alphaVPerK, List<String> notes) {
+                           Range rThetaFactor, Range alphaVPerK, List<String> notes, Optional<PositionSurges> surges) {
+
+    /** A position without surges. */
+    public PositionSpec(String id, BreakdownPart part, SteadyThermalPath path, CircuitSpec circuit, Range vzShiftV,
+                        Range rThetaFactor, Range alphaVPerK, List<String> notes) {
+        this(id, part, path, circuit, vzShiftV, rThetaFactor, alphaVPerK, notes, Optional.empty());
+    }
 
     public PositionSpec {
         notes = List.copyOf(notes);
+        surges = surges == null ? Optional.empty() : surges;
         if (id == null || id.isBlank() || part == null || path == null || circuit == null) {
             throw new IllegalArgumentException("a position needs an id, a part, a thermal path and a circuit");
         }
@@ -124,6 +133,7 @@ public record PositionSpec(String id, BreakdownPart part, SteadyThermalPath path
         List<String> all = new ArrayList<>(part.estimates());
         all.addAll(path.notes());
         ratingResistanceNote().ifPresent(all::add);
+        surges.ifPresent(s -> all.addAll(s.rating().notes()));
         all.addAll(notes);
         return all;
     }

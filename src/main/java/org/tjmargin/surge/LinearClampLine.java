@@ -27,6 +27,14 @@ public record LinearClampLine(double breakdownVoltage25V, double temperatureCoef
         }
     }
 
+    /**
+     * The high-current line of a breakdown diode (design 2.1): {@code Vbr(25 °C)} is the breakdown line's intercept
+     * at 25 °C, {@code αV} its temperature coefficient, {@code Rd} as given (e.g. {@link SurgeRating#dynamicResistanceOhm}).
+     */
+    public static LinearClampLine of(org.tjmargin.device.BreakdownDiode diode, double dynamicResistanceOhm) {
+        return new LinearClampLine(diode.vz0At25V(), diode.tc().alphaVPerK(), dynamicResistanceOhm);
+    }
+
     @Override
     public double breakdownVoltageV(double tjK) {
         return breakdownVoltage25V + temperatureCoefficientVPerK * (tjK - REFERENCE_TEMPERATURE_K);

@@ -70,7 +70,22 @@ class BadInputTest {
                 Arguments.of("missing-mounting.yaml", Kind.MISSING_FIELD, 7, 5, "positions[0].mounting"),
                 Arguments.of("unknown-file-type.txt", Kind.SYNTAX, 0, 0, ""),
                 Arguments.of("json-syntax.json", Kind.SYNTAX, 4, 3, ""),
-                Arguments.of("unknown-key.json", Kind.UNKNOWN_KEY, 8, 53, "positions[0].circuit.current-fed.ripple"));
+                Arguments.of("unknown-key.json", Kind.UNKNOWN_KEY, 8, 53, "positions[0].circuit.current-fed.ripple"),
+                Arguments.of("surges-without-part-surge-data.yaml", Kind.INCONSISTENT, 13, 7, "positions[0].surges"),
+                // The standard's ranges are checked together by the load-dump model: reported at its object.
+                Arguments.of("load-dump-outside-standard-range.yaml", Kind.NOT_PHYSICAL, 14, 20,
+                        "positions[0].surges[0].load-dump"),
+                Arguments.of("surge-period-shorter-than-pulse.yaml", Kind.INCONSISTENT, 15, 37,
+                        "positions[0].surges[0].repeat.period"),
+                Arguments.of("duplicate-surge-id.yaml", Kind.DUPLICATE_ID, 15, 13, "positions[0].surges[1].id"),
+                Arguments.of("surge-with-two-sources.yaml", Kind.INCONSISTENT, 15, 9,
+                        "positions[0].surges[0].current-pulse"),
+                Arguments.of("clamping-voltage-below-breakdown.yaml", Kind.INCONSISTENT, 18, 74,
+                        "parts[0].surge.clamping-voltage"),
+                Arguments.of("surge-waveform-front-after-half-value.yaml", Kind.WRONG_TYPE, 18, 47,
+                        "parts[0].surge.waveform"),
+                Arguments.of("zth-times-not-increasing.yaml", Kind.INCONSISTENT, 26, 20,
+                        "parts[0].surge.transient.zth[1].time"));
     }
 
     @ParameterizedTest(name = "{0}")

@@ -10,6 +10,17 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
 import org.junit.jupiter.api.Test;
+import org.tjmargin.solve.CornerPoint;
+import org.tjmargin.solve.PositionAtAmbient;
+import org.tjmargin.surge.DoubleExponentialPulse;
+import org.tjmargin.surge.LoadDumpPulse;
+import org.tjmargin.surge.LoadDumpSystem;
+import org.tjmargin.surge.PositionSurges;
+import org.tjmargin.surge.SurgeCase;
+import org.tjmargin.surge.SurgeRating;
+import org.tjmargin.surge.SurgeResult;
+import org.tjmargin.surge.TheveninSource;
+import org.tjmargin.thermal.FosterPulse;
 import org.tjmargin.circuit.CurrentFedSpec;
 import org.tjmargin.circuit.LoadRange;
 import org.tjmargin.circuit.ShuntRegulatorSpec;
@@ -44,7 +55,7 @@ class DemoDesignTest {
         Board b = d.board();
         assertEquals("demo-field-interface", d.designName());
         assertEquals(Optional.of("general-commercial"), d.policy());
-        assertEquals(List.of("D1", "D2", "D3"), b.positions().stream().map(PositionSpec::id).toList());
+        assertEquals(List.of("D1", "D2", "D3", "D4"), b.positions().stream().map(PositionSpec::id).toList());
         assertEquals(new Enclosure.SealedBox(0.09, 6.0, 2.0), b.enclosure());
         assertEquals(Celsius.toKelvin(-20), b.ambient().minK(), 1e-12);
         assertEquals(Celsius.toKelvin(55), b.ambient().maxK(), 1e-12);
@@ -80,6 +91,44 @@ class DemoDesignTest {
         assertTrue(d3.part().model().leakage().isKnown());
         // Case-referenced curve: the pad's reference resistance is the part's Rθjc.
         assertEquals(20.0, d3.path().rThetaJrKPerW(), 1e-12);
+        assertTrue(d3.surges().isEmpty());
+
+        PositionSpec d4 = b.positions().get(3);
+        PositionSurges surges = d4.surges().orElseThrow();
+        assertEquals(List.of("cwg-1kv", "load-dump"), surges.cases().stream().map(SurgeCase::id).toList());
+        SurgeCase cwg = surges.cases().get(0);
+        assertEquals(5, cwg.pulseCount());
+        assertEquals(60.0, cwg.periodS(), 1e-12);
+        assertEquals(60.0, cwg.protectedLimitV().getAsDouble(), 1e-12);
+        // 1.2/50 µs open-circuit voltage behind 2 Ω (IEC 61000-4-5, reference 4.2) plus the 10 Ω coupling.
+        assertEquals(new TheveninSource(DoubleExponentialPulse.voltage1p2x50(1000), 12.0), cwg.source());
+        assertEquals(LoadDumpPulse.testA(LoadDumpSystem.TWELVE_VOLT, 79, 4, 0.040).source(), surges.cases().get(1).source());
+        SurgeRating rating = surges.rating();
+        assertEquals(5000, rating.ratedPeakPowerW(), 1e-9);
+        assertEquals(FosterPulse.exponentialDecay(1e-3), rating.ratedPulse());
+        assertEquals(Celsius.toKelvin(175), rating.pulseTjMaxK(), 1e-9);
+        assertEquals(SurgeRating.NetworkSource.SEMI_INFINITE_DIE_ESTIMATE, rating.networkSource());
+        assertTrue(d4.allNotes().stream().anyMatch(n -> n.startsWith("surge transient thermal impedance not given")),
+                d4.allNotes()::toString);
+    }
+
+    @Test
+    void d4SurvivesItsSurgesFromTheSteadyStateAndPasses() {
+        Policy policy = ProfileLoader.shipped("general-commercial").policy().withBuiltInMinimum();
+        AnalysisResult r = Analysis.run(DesignLoader.load(DEMO).board(), policy, SolverSettings.DEFAULT);
+        PositionResult d4 = r.positions().get(3);
+        assertEquals(Verdict.PASS, d4.verdict());
+        PositionAtAmbient hot = r.atMaximumAmbient().positions().get(3);
+        CornerPoint worst = hot.worstCornerForSurge("load-dump", Celsius.toKelvin(175)).orElseThrow();
+        SurgeResult dump = worst.surge("load-dump").orElseThrow();
+        // Item 5: the surge starts from the corner's converged steady state.
+        assertEquals(worst.point().orElseThrow().tjK(), dump.startTjK(), 0.0);
+        assertTrue(dump.peakJunctionTemperatureK() > dump.startTjK() + 10, () -> "peak " + dump.peakJunctionTemperatureK());
+        // Every surge rule of the built-in minimum is checked at 55 °C.
+        List<String> ids = hot.worst().stream().map(w -> w.check().ruleId()).toList();
+        assertTrue(ids.containsAll(List.of("surge-tj-below-max", "surge-within-rating", "clamp-within-protected-limit")),
+                ids::toString);
+        assertEquals(Verdict.PASS, r.verdict());
     }
 
     @Test

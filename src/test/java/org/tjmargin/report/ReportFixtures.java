@@ -28,6 +28,12 @@ import org.tjmargin.solve.AnalysisResult;
 import org.tjmargin.solve.Board;
 import org.tjmargin.solve.PositionSpec;
 import org.tjmargin.solve.SolverSettings;
+import org.tjmargin.surge.CombinationWaveGenerator;
+import org.tjmargin.surge.PositionSurges;
+import org.tjmargin.surge.SurgeCase;
+import org.tjmargin.surge.SurgeRating;
+import org.tjmargin.thermal.FosterNetwork;
+import org.tjmargin.thermal.FosterPulse;
 import org.tjmargin.thermal.Enclosure;
 import org.tjmargin.thermal.GivenPath;
 import org.tjmargin.variation.Range;
@@ -86,6 +92,25 @@ final class ReportFixtures {
         BreakdownPart t = leakyClamp();
         return new PositionSpec(id, t, new GivenPath(300.0, 300.0, List.of()), new StandoffClampSpec(
                 Range.between(23.0, 24.0), 0.0), Range.exact(0.0), Range.exact(1.0), Range.exact(0.0), List.of());
+    }
+
+    /** The clamp with invented surge data (given Foster stages) facing a 1 kV combination wave on 2 Ω + 40 Ω. */
+    static PositionSpec surgeClamp(String id) {
+        PositionSpec base = clamp(id);
+        SurgeRating rating = new SurgeRating(1500, FosterPulse.exponentialDecay(1e-3), 55, 27, c(175),
+                FosterNetwork.of(new double[] {0.5, 3.0}, new double[] {1e-4, 5e-3}), SurgeRating.NetworkSource.GIVEN_FOSTER,
+                List.of());
+        SurgeCase cwg = new SurgeCase("cwg-1kv", "combination wave 1 kV, 2 Ω + 40 Ω (invented test)",
+                CombinationWaveGenerator.of(1000, CombinationWaveGenerator.Coupling.OTHER_LINES).source(), 3, 10,
+                java.util.OptionalDouble.of(70));
+        return new PositionSpec(id, base.part(), base.path(), base.circuit(), base.vzShiftV(), base.rThetaFactor(),
+                base.alphaVPerK(), base.notes(), java.util.Optional.of(new PositionSurges(rating, List.of(cwg))));
+    }
+
+    /** The surge clamp alone under the built-in minimum. */
+    static AnalysisResult surgeOnly(String name) {
+        return Analysis.run(new Board(name, List.of(surgeClamp("TVS9")), new Enclosure.FixedRise(10.0),
+                new AmbientRange(c(0), c(50), 6)), Policy.builtInMinimum(), SolverSettings.DEFAULT);
     }
 
     /**
