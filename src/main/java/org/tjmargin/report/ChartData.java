@@ -51,6 +51,15 @@ final class ChartData {
         return new XYSeries(key, false, true);
     }
 
+    /** Sweeps longer than this draw lines only: markers would merge into a band (and bloat the SVG), while the
+     * palette's dash patterns still tell the series apart. */
+    static final int MAX_MARKED_POINTS = 25;
+
+    /** Whether a sweep of {@code points} ambients gets point markers. */
+    static boolean markers(int points) {
+        return points <= MAX_MARKED_POINTS;
+    }
+
     /** A line renderer in the palette, series {@code first}, {@code first + 1} … taking successive inks. */
     static XYLineAndShapeRenderer lines(int first, int count, boolean shapes) {
         XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, shapes);

@@ -85,7 +85,7 @@ final class ChartMargin {
         double pad = Math.max(2.0, 0.06 * (yHi - yLo));
         yAxis.setRange(yLo - pad, yHi + pad);
 
-        XYPlot plot = new XYPlot(data, xAxis, yAxis, ChartData.lines(0, data.getSeriesCount(), true));
+        XYPlot plot = new XYPlot(data, xAxis, yAxis, ChartData.lines(0, data.getSeriesCount(), ChartData.markers(result.sweep().size())));
         ChartStyle.plot(plot);
         plot.addRangeMarker(new ValueMarker(0.0, Palette.INK, Palette.zeroLine()), Layer.BACKGROUND);
 

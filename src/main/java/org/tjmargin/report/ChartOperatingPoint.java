@@ -73,7 +73,7 @@ final class ChartOperatingPoint {
         temps.addSeries(tj);
         temps.addSeries(air);
         XYPlot tPlot = new XYPlot(temps, null, ChartStyle.numberAxis("Temperature (°C)"),
-                ChartData.lines(0, 2, true));
+                ChartData.lines(0, 2, ChartData.markers(result.sweep().size())));
         double tjMaxK = spec.part().ratings().tjMaxK();
         tPlot.addRangeMarker(ChartData.level(ChartData.celsius(tjMaxK), Palette.RUNAWAY_MARK,
                 Palette.designLimitLine(), "Tj max " + ChartData.temperature(tjMaxK)), Layer.BACKGROUND);
@@ -81,13 +81,13 @@ final class ChartOperatingPoint {
         includeMarker(tPlot, ChartData.celsius(tjMaxK));
 
         XYPlot pPlot = new XYPlot(new XYSeriesCollection(power), null,
-                ChartStyle.numberAxis("Diode power (" + pScale.symbol() + ")"), ChartData.lines(2, 1, true));
+                ChartStyle.numberAxis("Diode power (" + pScale.symbol() + ")"), ChartData.lines(2, 1, ChartData.markers(result.sweep().size())));
         ((NumberAxis) pPlot.getRangeAxis()).setAutoRangeIncludesZero(true);
 
         XYSeriesCollection volts = new XYSeriesCollection();
         volts.addSeries(vLow);
         volts.addSeries(vHigh);
-        XYPlot vPlot = new XYPlot(volts, null, ChartStyle.numberAxis("Output (V)"), ChartData.lines(3, 2, true));
+        XYPlot vPlot = new XYPlot(volts, null, ChartStyle.numberAxis("Output (V)"), ChartData.lines(3, 2, ChartData.markers(result.sweep().size())));
 
         // The junction temperature is what the chart is about: it gets the most height.
         int[] weights = {3, 2, 2};

@@ -102,7 +102,7 @@ public final class MaximumAmbientSearch {
 
     /** The position's margin at one ambient; runaway and unresolved points count as failing. */
     static double marginAt(PreparedBoard board, Policy policy, int index, double ambientK, SolverSettings settings) {
-        PositionAtAmbient p = BoardSolver.solveAt(board, policy, ambientK, settings).positions().get(index);
+        PositionAtAmbient p = BoardSolver.positionAt(board, policy, ambientK, settings, index);
         if (p.status() != PointStatus.CONVERGED) {
             return Math.min(p.margin(), -1.0);
         }

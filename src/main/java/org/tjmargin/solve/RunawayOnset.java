@@ -63,6 +63,6 @@ public record RunawayOnset(double ambientK, boolean atOrBelowSearch) {
     }
 
     private static boolean runsAway(PreparedBoard board, Policy policy, int index, double t, SolverSettings s) {
-        return BoardSolver.solveAt(board, policy, t, s).positions().get(index).status() == PointStatus.RUNAWAY;
+        return BoardSolver.positionAt(board, policy, t, s, index).status() == PointStatus.RUNAWAY;
     }
 }
