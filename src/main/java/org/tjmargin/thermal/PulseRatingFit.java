@@ -105,28 +105,6 @@ public final class PulseRatingFit {
     }
 
     private static void checkPoints(double[] widthsS, double[] peakPowersW, int stages) {
-        if (stages < 1) {
-            throw new IllegalArgumentException("a Foster fit needs at least one stage: " + stages);
-        }
-        if (widthsS.length != peakPowersW.length) {
-            throw new IllegalArgumentException("rating fit has " + widthsS.length + " widths but " + peakPowersW.length + " powers");
-        }
-        if (widthsS.length < 2 * stages) {
-            throw new IllegalArgumentException("a " + stages + "-stage Foster fit needs at least " + 2 * stages
-                    + " rating points, has " + widthsS.length);
-        }
-        for (int j = 0; j < widthsS.length; j++) {
-            if (!(widthsS[j] > 0) || !Double.isFinite(widthsS[j])) {
-                throw new IllegalArgumentException("rating point " + j + ": width must be positive and finite: " + widthsS[j] + " s");
-            }
-            if (j > 0 && !(widthsS[j] > widthsS[j - 1])) {
-                throw new IllegalArgumentException("rating point " + j + ": widths must increase: " + widthsS[j - 1] + " s then "
-                        + widthsS[j] + " s");
-            }
-            if (!(peakPowersW[j] > 0) || !Double.isFinite(peakPowersW[j])) {
-                throw new IllegalArgumentException("rating point " + j + ": peak power must be positive and finite: "
-                        + peakPowersW[j] + " W");
-            }
-        }
+        FitPoints.check("rating point", "width", widthsS, "peak power", "W", peakPowersW, stages);
     }
 }

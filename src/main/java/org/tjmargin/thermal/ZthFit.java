@@ -112,28 +112,6 @@ public final class ZthFit {
     }
 
     private static void checkPoints(double[] timeS, double[] zthKPerW, int stages) {
-        if (stages < 1) {
-            throw new IllegalArgumentException("a Foster fit needs at least one stage: " + stages);
-        }
-        if (timeS.length != zthKPerW.length) {
-            throw new IllegalArgumentException("Zth fit has " + timeS.length + " times but " + zthKPerW.length + " impedances");
-        }
-        if (timeS.length < 2 * stages) {
-            throw new IllegalArgumentException("a " + stages + "-stage Foster fit needs at least " + 2 * stages
-                    + " points, has " + timeS.length);
-        }
-        for (int j = 0; j < timeS.length; j++) {
-            if (!(timeS[j] > 0) || !Double.isFinite(timeS[j])) {
-                throw new IllegalArgumentException("Zth point " + j + ": time must be positive and finite: " + timeS[j] + " s");
-            }
-            if (j > 0 && !(timeS[j] > timeS[j - 1])) {
-                throw new IllegalArgumentException("Zth point " + j + ": times must increase: " + timeS[j - 1] + " s then "
-                        + timeS[j] + " s");
-            }
-            if (!(zthKPerW[j] > 0) || !Double.isFinite(zthKPerW[j])) {
-                throw new IllegalArgumentException("Zth point " + j + ": impedance must be positive and finite: "
-                        + zthKPerW[j] + " K/W");
-            }
-        }
+        FitPoints.check("Zth point", "time", timeS, "impedance", "K/W", zthKPerW, stages);
     }
 }
