@@ -66,24 +66,32 @@ final class TheveninDrive {
             // Start where the tangent at Izt (the straight line's slope) meets the source line: on a convex knee
             // this lands close to the root, and Newton needs two or three steps.
             double i = Math.min(hi, Math.max(lo, lineI));
-            for (int n = 0; n < MAX_HALVINGS && hi - lo > 1e-15 * hi; n++) {
-                double h = vthV - d.breakdownVoltageV(i, tjK) - rthOhm * i;
+            double v = d.breakdownVoltageV(i, tjK);
+            // h is convex and decreasing on the knee (V is concave there), and h(lineI) ≥ 0 because the knee lies
+            // below the straight line: Newton then climbs monotonically onto the root. A relative step of 1e-13
+            // is far below any physical resolution of the current.
+            for (int n = 0; n < MAX_HALVINGS && hi - lo > 1e-13 * hi; n++) {
+                double h = vthV - v - rthOhm * i;
                 if (h >= 0) {
                     lo = i;
                 } else {
                     hi = i;
                 }
-                double next = i + h / (d.dynamicImpedanceOhm(i) + rthOhm);
+                double zz = d.dynamicImpedanceOhm(i);
+                double next = i + h / (zz + rthOhm);
                 if (!(next > lo && next < hi)) {
                     next = 0.5 * (lo + hi);
                 }
-                if (Math.abs(next - i) <= 1e-15 * hi) {
+                if (Math.abs(next - i) <= 1e-13 * hi) {
+                    // One more evaluation would change V by Zz·Δ only (the second-order term is ~1e-26 V).
+                    v += zz * (next - i);
                     i = next;
                     break;
                 }
                 i = next;
+                v = d.breakdownVoltageV(i, tjK);
             }
-            return new double[] {d.breakdownVoltageV(i, tjK), i, Region.KNEE.ordinal()};
+            return new double[] {v, i, Region.KNEE.ordinal()};
         }
         if (vthV <= 0) {
             return new double[] {0.0, 0.0, Region.BELOW_KNEE.ordinal()};

@@ -174,6 +174,11 @@ public record BreakdownDiode(double vz0At25V, double rzOhm, double iztA, double 
         if (!leakage.isKnown()) {
             return 0.0;
         }
+        // Cheap exit on the hot path: the leakage reaches the split only after log2(split/Ir) doublings, and the
+        // binary exponent of that ratio is a lower bound of its log2 (no power function needed below it).
+        if ((tjK - Celsius.T25_K) / leakage.doublingK() < Math.getExponent(leakageSplitA() / leakage.irA())) {
+            return 0.0;
+        }
         double excess = leakage.currentAtTestVoltageA(tjK) - leakageSplitA();
         return excess > 0 ? excess / leakageVoltageV(kneeVoltageV(tjK)) : 0.0;
     }
