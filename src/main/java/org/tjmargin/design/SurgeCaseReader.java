@@ -1,19 +1,24 @@
 package org.tjmargin.design;
 
+import java.nio.file.Path;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
-
 import org.tjmargin.surge.CombinationWaveGenerator;
 import org.tjmargin.surge.CubicExponentialPulse;
 import org.tjmargin.surge.DoubleExponentialPulse;
+import org.tjmargin.surge.HalfSinePulse;
 import org.tjmargin.surge.IdealCurrentSource;
 import org.tjmargin.surge.LoadDumpPulse;
 import org.tjmargin.surge.LoadDumpSystem;
+import org.tjmargin.surge.RectangularPulse;
 import org.tjmargin.surge.SurgeCase;
+import org.tjmargin.surge.SurgeQuantity;
 import org.tjmargin.surge.SurgeSource;
+import org.tjmargin.surge.TabulatedWaveform;
+import org.tjmargin.surge.TheveninSource;
 import org.tjmargin.units.Dimension;
 import org.tjmargin.units.Quantities;
 
@@ -24,11 +29,13 @@ import org.tjmargin.units.Quantities;
  */
 final class SurgeCaseReader {
 
-    private static final Set<String> KEYS = Set.of("id", "combination-wave", "load-dump", "current-pulse", "repeat",
+    private static final Set<String> KEYS = Set.of("id", "combination-wave", "load-dump", "current-pulse", "table",
+            "repeat",
             "protected-limit");
     private static final Set<String> CWG_KEYS = Set.of("peak", "coupling", "model");
     private static final Set<String> LOAD_DUMP_KEYS = Set.of("system", "test", "us", "ri", "td", "suppressed");
-    private static final Set<String> PULSE_KEYS = Set.of("waveform", "peak");
+    private static final Set<String> PULSE_KEYS = Set.of("waveform", "peak", "width");
+    private static final Set<String> TABLE_KEYS = Set.of("file", "source-resistance");
     private static final Set<String> REPEAT_KEYS = Set.of("count", "period");
 
     private SurgeCaseReader() {
@@ -64,7 +71,7 @@ final class SurgeCaseReader {
         }
         Fields f = of.get();
         Optional<String> id = f.text("id", Need.REQUIRED);
-        Optional<String> which = f.oneOf(Need.REQUIRED, "combination-wave", "load-dump", "current-pulse");
+        Optional<String> which = f.oneOf(Need.REQUIRED, "combination-wave", "load-dump", "current-pulse", "table");
         Optional<Value> limit = f.quantity("protected-limit", Need.OPTIONAL, Sign.POSITIVE, Dimension.VOLTAGE);
         Optional<Fields> repeat = f.object("repeat", Need.OPTIONAL, REPEAT_KEYS);
         Optional<Integer> count = repeat.flatMap(r -> r.integer("count", Need.REQUIRED));
@@ -80,6 +87,7 @@ final class SurgeCaseReader {
         Optional<Described> source = switch (which.get()) {
             case "combination-wave" -> f.object("combination-wave", Need.REQUIRED, CWG_KEYS).flatMap(SurgeCaseReader::combinationWave);
             case "load-dump" -> f.object("load-dump", Need.REQUIRED, LOAD_DUMP_KEYS).flatMap(SurgeCaseReader::loadDump);
+            case "table" -> f.object("table", Need.REQUIRED, TABLE_KEYS).flatMap(SurgeCaseReader::table);
             default -> f.object("current-pulse", Need.REQUIRED, PULSE_KEYS).flatMap(SurgeCaseReader::currentPulse);
         };
         if (source.isEmpty()) {
@@ -183,11 +191,55 @@ final class SurgeCaseReader {
             case "8/20" -> s = new IdealCurrentSource(CubicExponentialPulse.current8x20(ip));
             case "10/1000" -> s = new IdealCurrentSource(DoubleExponentialPulse.current10x1000(ip));
             case "5/320" -> s = new IdealCurrentSource(DoubleExponentialPulse.current5x320(ip));
+            case "half-sine-8.3ms" -> s = new IdealCurrentSource(HalfSinePulse.sixtyHertzCurrent(ip));
+            case "half-sine-10ms" -> s = new IdealCurrentSource(HalfSinePulse.fiftyHertzCurrent(ip));
+            case "rectangular" -> {
+                Optional<Value> width = c.quantity("width", Need.REQUIRED, Sign.POSITIVE, Dimension.TIME);
+                if (width.isEmpty()) {
+                    return Optional.empty();
+                }
+                s = new IdealCurrentSource(new RectangularPulse(ip, width.get().si(), SurgeQuantity.CURRENT));
+            }
             default -> {
-                c.report(InputProblem.Kind.WRONG_TYPE, "waveform", "expected 8/20, 10/1000 or 5/320, got '" + w.get() + "'");
+                c.report(InputProblem.Kind.WRONG_TYPE, "waveform", "expected 8/20, 10/1000, 5/320, half-sine-8.3ms, "
+                        + "half-sine-10ms or rectangular, got '" + w.get() + "'");
                 return Optional.empty();
             }
         }
+        if (c.has("width") && !"rectangular".equals(w.get())) {
+            c.report(InputProblem.Kind.INCONSISTENT, "width", "a width belongs to a rectangular pulse only");
+            return Optional.empty();
+        }
         return Optional.of(new Described(s, "current pulse " + w.get() + " µs, " + peak.get().text() + " peak"));
+    }
+
+    /** A user's waveform table: a current table drives the clamp directly, a voltage table through its resistance. */
+    private static Optional<Described> table(Fields t) {
+        Optional<String> file = t.text("file", Need.REQUIRED);
+        Optional<Value> r = t.quantity("source-resistance", Need.OPTIONAL, Sign.POSITIVE, Dimension.RESISTANCE);
+        if (file.isEmpty() || (t.has("source-resistance") && r.isEmpty())) {
+            return Optional.empty();
+        }
+        Path designDir = Path.of(t.ctx().name()).toAbsolutePath().getParent();
+        Path csv = designDir == null ? Path.of(file.get()) : designDir.resolve(file.get());
+        Node at = t.get("file", Need.REQUIRED).orElseThrow();
+        Optional<TabulatedWaveform> w = SurgeTableReader.read(t.ctx(), at, t.pathOf("file"), csv);
+        if (w.isEmpty()) {
+            return Optional.empty();
+        }
+        if (w.get().quantity() == SurgeQuantity.VOLTAGE) {
+            if (r.isEmpty()) {
+                t.report(InputProblem.Kind.MISSING_FIELD, "file", "a voltage table needs a source-resistance");
+                return Optional.empty();
+            }
+            return Optional.of(new Described(new TheveninSource(w.get(), r.get().si()), "user voltage table "
+                    + file.get() + " behind " + r.get().text()));
+        }
+        if (r.isPresent()) {
+            t.report(InputProblem.Kind.INCONSISTENT, r.get(), "a current table drives the clamp directly; a "
+                    + "source-resistance belongs to a voltage table");
+            return Optional.empty();
+        }
+        return Optional.of(new Described(new IdealCurrentSource(w.get()), "user current table " + file.get()));
     }
 }
