@@ -57,6 +57,7 @@ public final class DesignLoader {
         problems.throwIfAny();
         Board b = board.orElseThrow(() -> new IllegalStateException("the design did not map, yet no problem was"
                 + " reported"));
+        inputs.addAll(problems.furtherInputs());
         return new LoadedDesign(b, policy, inputs, b.name());
     }
 

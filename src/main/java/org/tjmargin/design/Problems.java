@@ -7,10 +7,23 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * The problems of one load, collected so that all of them are reported together. Mutable and confined to the
- * load that owns it.
+ * The problems of one load, collected so that all of them are reported together, and the further files the load
+ * read on the way (waveform tables named by a design), so that their digests reach the provenance. Mutable and
+ * confined to the load that owns it.
  */
 final class Problems {
+
+    private final List<InputFile> furtherInputs = new ArrayList<>();
+
+    /** Records a file read while mapping (beyond the design and its parts library). */
+    void readAlso(InputFile f) {
+        furtherInputs.add(f);
+    }
+
+    /** The files recorded by {@link #readAlso}, in reading order. */
+    List<InputFile> furtherInputs() {
+        return List.copyOf(furtherInputs);
+    }
 
     private final List<InputProblem> list = new ArrayList<>();
     private final Map<String, Integer> fileOrder = new LinkedHashMap<>();

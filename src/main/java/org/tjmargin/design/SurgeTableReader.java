@@ -37,7 +37,9 @@ final class SurgeTableReader {
         String name = file.normalize().toString();
         List<String> lines;
         try {
-            lines = Files.readAllLines(file, StandardCharsets.UTF_8);
+            byte[] bytes = Files.readAllBytes(file);
+            ctx.problems().readAlso(new InputFile(file.normalize(), SourceFile.sha256Of(bytes)));
+            lines = new String(bytes, StandardCharsets.UTF_8).lines().toList();
         } catch (NoSuchFileException e) {
             ctx.report(InputProblem.Kind.FILE_NOT_FOUND, at, path, "no such file: " + name);
             return Optional.empty();

@@ -48,6 +48,8 @@ class SurgeTableReaderTest {
         assertEquals(10e-6, w.timeS()[2], 1e-18);
         assertEquals(100.0, w.valueAt(10e-6), 1e-12);
         assertEquals(75.0, w.valueAt(6e-6), 1e-9); // linear between (2 µs, 50 A) and (10 µs, 100 A)
+        // The table is an input like the others: its digest goes into the provenance.
+        assertEquals(true, d.inputs().stream().anyMatch(f -> f.path().toString().endsWith("pulse.csv")));
     }
 
     @Test
