@@ -122,6 +122,11 @@ public final class BoardSolver {
                 OperatingPoint p = c.point();
                 allowed = spec.part().ratings().powerCurve().allowedPowerAt(p.referenceK());
                 surges = surgeAt[k] ? SurgeChecks.at(spec, inst, p) : List.of();
+                if (surges.stream().anyMatch(sr -> sr.stopped().isPresent())) {
+                    // A surge transient that stopped before its end gives partial values only: the position has no
+                    // answer the tool can stand behind (exit status 3), though its other checks are still shown.
+                    status = status.worse(PointStatus.NOT_CONVERGED);
+                }
                 ctx = Measurements.of(spec, inst, p, allowed, resistorAllowed, surges);
                 if (!hottestRunaway && p.tjK() > hottestTj) {
                     hottestTj = p.tjK();
