@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import org.tjmargin.circuit.ShuntRegulatorSpec;
 import org.tjmargin.derating.Policy;
 import org.tjmargin.derating.RuleCheck;
 import org.tjmargin.derating.RuleContext;
@@ -105,8 +104,7 @@ public final class BoardSolver {
         double leastI = Double.POSITIVE_INFINITY;
         PointStatus status = PointStatus.CONVERGED;
         Map<String, WorstCheck> worst = new LinkedHashMap<>();
-        double resistorAllowed = spec.circuit() instanceof ShuntRegulatorSpec s
-                ? s.resistor().rating().allowedPowerAt(tLocalK) : 0.0;
+        double resistorAllowed = spec.resistorAllowedW(tLocalK);
         List<ThermalOutcome> outcomes = new ArrayList<>(instances.size());
         for (PositionInstance inst : instances) {
             outcomes.add(inst.solve(tLocalK, settings));
@@ -120,7 +118,7 @@ public final class BoardSolver {
             double allowed = 0;
             if (out instanceof ThermalOutcome.Converged c) {
                 OperatingPoint p = c.point();
-                allowed = spec.part().ratings().powerCurve().allowedPowerAt(p.referenceK());
+                allowed = spec.allowedPowerW(p);
                 surges = surgeAt[k] ? SurgeChecks.at(spec, inst, p) : List.of();
                 if (surges.stream().anyMatch(sr -> sr.stopped().isPresent())) {
                     // A surge transient that stopped before its end gives partial values only: the position has no

@@ -104,6 +104,16 @@ public record PositionSpec(String id, BreakdownPart part, SteadyThermalPath path
         };
     }
 
+    /** The device's power rating read at the temperature the point's rating reference reaches (W). */
+    public double allowedPowerW(OperatingPoint p) {
+        return part.ratings().powerCurve().allowedPowerAt(p.referenceK());
+    }
+
+    /** The series resistor's rating at the local air (W); 0 for circuits without one. */
+    public double resistorAllowedW(double tLocalK) {
+        return circuit instanceof ShuntRegulatorSpec s ? s.resistor().rating().allowedPowerAt(tLocalK) : 0.0;
+    }
+
     /**
      * What the policy's rules see of {@code instance} solved in air at {@code tLocalK} with outcome {@code out}:
      * the same quantities the corner analysis holds against the policy (the device rating read at the reference
@@ -113,10 +123,7 @@ public record PositionSpec(String id, BreakdownPart part, SteadyThermalPath path
     public RuleContext ruleContext(PositionInstance instance, ThermalOutcome out, double tLocalK) {
         if (out instanceof ThermalOutcome.Converged c) {
             OperatingPoint p = c.point();
-            double allowed = part.ratings().powerCurve().allowedPowerAt(p.referenceK());
-            double resistorAllowed = circuit instanceof ShuntRegulatorSpec s
-                    ? s.resistor().rating().allowedPowerAt(tLocalK) : 0.0;
-            return Measurements.of(this, instance, p, allowed, resistorAllowed);
+            return Measurements.of(this, instance, p, allowedPowerW(p), resistorAllowedW(tLocalK));
         }
         if (out instanceof ThermalOutcome.Runaway r) {
             return Measurements.unresolved(this, r.capK(), tLocalK);
