@@ -1,5 +1,6 @@
 package org.tjmargin.derating;
 
+import org.tjmargin.device.Celsius;
 /**
  * The value a rule holds its quantity against, possibly depending on the part.
  */
@@ -27,7 +28,7 @@ public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.Lower
 
     /** Formats one limit value: °C with one decimal for temperatures, four significant digits for ratios. */
     static String value(double v, boolean temperature) {
-        return temperature ? String.format(java.util.Locale.ROOT, "%.1f °C", v - 273.15)
+        return temperature ? String.format(java.util.Locale.ROOT, "%.1f °C", Celsius.toCelsius(v))
                 : String.format(java.util.Locale.ROOT, "%.4g", v).replaceAll("\\.?0+$", "");
     }
 
@@ -155,7 +156,7 @@ public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.Lower
             StringBuilder sb = new StringBuilder("by ").append(basis.name().toLowerCase(java.util.Locale.ROOT)
                     .replace('_', ' ')).append(" temperature:");
             for (int i = 0; i < temperaturesK.length; i++) {
-                sb.append(String.format(java.util.Locale.ROOT, " %.1f °C → %s", temperaturesK[i] - 273.15,
+                sb.append(String.format(java.util.Locale.ROOT, " %.1f °C → %s", Celsius.toCelsius(temperaturesK[i]),
                         Limit.value(values[i], temperature)));
                 if (i + 1 < temperaturesK.length) {
                     sb.append(',');

@@ -2,6 +2,7 @@ package org.tjmargin.derating;
 
 import java.util.Optional;
 import java.util.OptionalDouble;
+import org.tjmargin.device.Celsius;
 
 /**
  * A named derating rule: a quantity, a ceiling or floor, a limit, and where the limit comes from.
@@ -22,7 +23,7 @@ import java.util.OptionalDouble;
 public record Rule(String id, String title, Measure measure, Bound bound, Limit limit, String provenance) {
 
     /** Rise origin of temperature margins (K): 25 °C, where datasheet ratings start. */
-    public static final double TEMPERATURE_MARGIN_ORIGIN_K = 298.15;
+    public static final double TEMPERATURE_MARGIN_ORIGIN_K = Celsius.T25_K;
 
     public Rule {
         if (id == null || id.isBlank() || measure == null || bound == null || limit == null) {

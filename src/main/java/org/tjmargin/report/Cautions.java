@@ -48,7 +48,7 @@ public final class Cautions {
         List<String> hot = new ArrayList<>();
         for (PositionAtAmbient p : hottest.positions()) {
             p.hottest().flatMap(c -> c.point()).ifPresent(op -> {
-                if (op.tjK() - 273.15 > HOT_SURFACE_C) {
+                if (Labels.celsius(op.tjK()) > HOT_SURFACE_C) {
                     hot.add(p.positionId());
                 }
             });

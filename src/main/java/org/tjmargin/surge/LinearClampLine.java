@@ -1,5 +1,6 @@
 package org.tjmargin.surge;
 
+import org.tjmargin.device.Celsius;
 /**
  * A clamp line whose breakdown voltage moves linearly with junction temperature:
  * {@code Vbr(Tj) = Vbr25 + αV·(Tj − 298.15 K)} (design §2.1; TVS datasheet convention
@@ -13,7 +14,7 @@ public record LinearClampLine(double breakdownVoltage25V, double temperatureCoef
         implements ClampLine {
 
     /** 25 °C in kelvin, the reference temperature of datasheet breakdown voltages. */
-    public static final double REFERENCE_TEMPERATURE_K = 298.15;
+    public static final double REFERENCE_TEMPERATURE_K = Celsius.T25_K;
 
     public LinearClampLine {
         if (!(breakdownVoltage25V > 0) || !Double.isFinite(breakdownVoltage25V)) {

@@ -1,7 +1,7 @@
 package org.tjmargin.surge;
 
 import java.util.List;
-
+import org.tjmargin.device.Celsius;
 import org.tjmargin.thermal.FosterNetwork;
 import org.tjmargin.thermal.FosterPulse;
 
@@ -30,7 +30,7 @@ public record SurgeRating(double ratedPeakPowerW, FosterPulse ratedPulse, double
         double pulseTjMaxK, FosterNetwork network, NetworkSource networkSource, List<String> notes) {
 
     /** 25 °C in kelvin, the start temperature of pulse ratings (reference 4.6). */
-    public static final double RATING_START_K = 298.15;
+    public static final double RATING_START_K = Celsius.T25_K;
 
     /** Where the transient thermal impedance comes from. */
     public enum NetworkSource {

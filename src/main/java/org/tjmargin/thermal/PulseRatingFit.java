@@ -1,5 +1,6 @@
 package org.tjmargin.thermal;
 
+import org.tjmargin.device.Celsius;
 /**
  * Fits a Foster network to a peak-pulse-power versus pulse-width rating curve.
  *
@@ -21,7 +22,7 @@ package org.tjmargin.thermal;
 public final class PulseRatingFit {
 
     /** The start temperature of pulse ratings, 25 °C, in kelvin (datasheet convention, reference 4.6). */
-    public static final double RATING_START_TEMPERATURE_K = 298.15;
+    public static final double RATING_START_TEMPERATURE_K = Celsius.T25_K;
 
     /** How far beyond the widths' range a time constant may go. */
     private static final double TAU_RANGE_FACTOR = 1e3;
