@@ -1,6 +1,5 @@
 package org.tjmargin.surge;
 
-import java.util.List;
 
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 
@@ -19,7 +18,7 @@ import org.apache.commons.math3.analysis.solvers.BrentSolver;
  * @param tauS     time constant (s), positive
  * @param quantity current or voltage
  */
-public record CubicExponentialPulse(double peak, double tauS, SurgeQuantity quantity) implements Waveform {
+public record CubicExponentialPulse(double peak, double tauS, SurgeQuantity quantity) implements SinglePeakPulse {
 
     /** Time constant of the 8/20 µs model, 3.911 µs (reference 4.2; IEEE C62.41.2 style, from memory, verify). */
     public static final double EIGHT_TWENTY_TAU_S = 3.911e-6;
@@ -61,16 +60,6 @@ public record CubicExponentialPulse(double peak, double tauS, SurgeQuantity quan
         }
         double u = tS / (3 * tauS);
         return peak * u * u * u * Math.exp(3 - tS / tauS);
-    }
-
-    @Override
-    public double[] breakpointsS() {
-        return new double[] {0, peakTimeS(), durationS()};
-    }
-
-    @Override
-    public List<Front> fronts() {
-        return List.of(new Front(0, peakTimeS()));
     }
 
     /**

@@ -1,6 +1,5 @@
 package org.tjmargin.surge;
 
-import java.util.List;
 
 /**
  * The double exponential pulse {@code a·(e^(−t/τ1) − e^(−t/τ2))}, {@code τ1 > τ2}, the classic surge model
@@ -21,7 +20,7 @@ import java.util.List;
  * @param tau2S     the fast (front) time constant (s), below {@code tau1S}
  * @param quantity  current or voltage, which also fixes the timing definition
  */
-public record DoubleExponentialPulse(double amplitude, double tau1S, double tau2S, SurgeQuantity quantity) implements Waveform {
+public record DoubleExponentialPulse(double amplitude, double tau1S, double tau2S, SurgeQuantity quantity) implements SinglePeakPulse {
 
     public DoubleExponentialPulse {
         if (!(amplitude > 0) || !Double.isFinite(amplitude)) {
@@ -103,16 +102,6 @@ public record DoubleExponentialPulse(double amplitude, double tau1S, double tau2
             return 0;
         }
         return amplitude * DoubleExponentialTiming.shape(tS / tau1S, tau2S / tau1S);
-    }
-
-    @Override
-    public double[] breakpointsS() {
-        return new double[] {0, peakTimeS(), durationS()};
-    }
-
-    @Override
-    public List<Front> fronts() {
-        return List.of(new Front(0, peakTimeS()));
     }
 
     /** Beyond the peak the value is below {@code a·e^(−t/τ1)}, so the tail ends at {@code τ1·ln(a/(ε·peak))}. */
