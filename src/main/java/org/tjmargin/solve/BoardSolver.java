@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.tjmargin.derating.Policy;
+import org.tjmargin.surge.ClampTransientOutcome;
 import org.tjmargin.derating.RuleCheck;
 import org.tjmargin.derating.RuleContext;
 import org.tjmargin.surge.SurgeResult;
@@ -48,7 +49,7 @@ public final class BoardSolver {
         double heat = 0;
         for (int i = 0; i < board.board().positions().size(); i++) {
             PositionAtAmbient p = evaluate(board.board().positions().get(i), board.instances().get(i), policy,
-                    ambientK, tLocal, settings);
+                    ambientK, tLocal, settings, air.outcomesOf(i));
             positions.add(p);
             status = status.worse(p.status());
             heat += maxHeatW(p, board.instances().get(i), settings);
@@ -65,7 +66,7 @@ public final class BoardSolver {
                                                SolverSettings settings, int index) {
         Air air = air(board, ambientK, settings);
         PositionAtAmbient p = evaluate(board.board().positions().get(index), board.instances().get(index), policy,
-                ambientK, ambientK + air.riseK(), settings);
+                ambientK, ambientK + air.riseK(), settings, air.outcomesOf(index));
         if (air.status() == PointStatus.CONVERGED) {
             return p;
         }
@@ -73,29 +74,58 @@ public final class BoardSolver {
                 p.leastCurrentIndex(), p.worst(), p.margin(), p.limitingRuleId(), p.status().worse(air.status()));
     }
 
-    /** The enclosure air's rise at one ambient, with the status of its balance. */
-    private record Air(double riseK, int evaluations, PointStatus status) {
+    /**
+     * The enclosure air's rise at one ambient, with the status of its balance and, when the balance's last
+     * evaluation was at the returned rise (as the fixed-point search guarantees), every corner's outcome there, so
+     * that the positions are not solved a second time in the same air.
+     */
+    private record Air(double riseK, int evaluations, PointStatus status, List<List<ThermalOutcome>> outcomes) {
+
+        /** The outcomes of position {@code i} in this air, or null when they were not kept. */
+        List<ThermalOutcome> outcomesOf(int i) {
+            return outcomes == null ? null : outcomes.get(i);
+        }
+    }
+
+    /** The last air evaluated by the balance, and every corner's outcome in it. */
+    private static final class LastHeat {
+        double tLocalK = Double.NaN;
+        List<List<ThermalOutcome>> outcomes;
     }
 
     private static Air air(PreparedBoard board, double ambientK, SolverSettings settings) {
         Enclosure enc = board.board().enclosure();
         if (!enc.couplesPositions()) {
-            return new Air(enc.riseK(0.0), 0, PointStatus.CONVERGED);
+            return new Air(enc.riseK(0.0), 0, PointStatus.CONVERGED, null);
         }
+        LastHeat last = new LastHeat();
         FixedPointOutcome air = LowestFixedPoint.find(
-                dT -> enc.riseK(boardHeatW(board, ambientK + dT, settings)), 0.0, AIR_BALANCE, false);
+                dT -> enc.riseK(boardHeatW(board, ambientK + dT, settings, last)), 0.0, AIR_BALANCE, false);
+        double rise;
+        PointStatus status;
         if (air instanceof FixedPointOutcome.Root r) {
-            return new Air(r.x(), air.evaluations(), PointStatus.CONVERGED);
+            rise = r.x();
+            status = PointStatus.CONVERGED;
+        } else if (air instanceof FixedPointOutcome.Runaway rw) {
+            rise = rw.lastX();
+            status = PointStatus.RUNAWAY;
+        } else {
+            rise = ((FixedPointOutcome.Exhausted) air).lastX();
+            status = PointStatus.NOT_CONVERGED;
         }
-        if (air instanceof FixedPointOutcome.Runaway rw) {
-            return new Air(rw.lastX(), air.evaluations(), PointStatus.RUNAWAY);
-        }
-        return new Air(((FixedPointOutcome.Exhausted) air).lastX(), air.evaluations(), PointStatus.NOT_CONVERGED);
+        return new Air(rise, air.evaluations(), status, last.tLocalK == ambientK + rise ? last.outcomes : null);
     }
 
     /** Every corner of one position in air at {@code tLocalK}, held against the policy. */
     static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
                                       double ambientK, double tLocalK, SolverSettings settings) {
+        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, null);
+    }
+
+    /** As above, reusing the corners' outcomes in this air when the air balance already solved them. */
+    private static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
+                                              double ambientK, double tLocalK, SolverSettings settings,
+                                              List<ThermalOutcome> solved) {
         List<CornerPoint> corners = new ArrayList<>(instances.size());
         int hottest = -1;
         double hottestTj = Double.NEGATIVE_INFINITY;
@@ -105,9 +135,12 @@ public final class BoardSolver {
         PointStatus status = PointStatus.CONVERGED;
         Map<String, WorstCheck> worst = new LinkedHashMap<>();
         double resistorAllowed = spec.resistorAllowedW(tLocalK);
-        List<ThermalOutcome> outcomes = new ArrayList<>(instances.size());
-        for (PositionInstance inst : instances) {
-            outcomes.add(inst.solve(tLocalK, settings));
+        List<ThermalOutcome> outcomes = solved;
+        if (outcomes == null) {
+            outcomes = new ArrayList<>(instances.size());
+            for (PositionInstance inst : instances) {
+                outcomes.add(inst.solve(tLocalK, settings));
+            }
         }
         boolean[] surgeAt = SurgeChecks.cornersToEvaluate(spec, instances, outcomes);
         for (int k = 0; k < instances.size(); k++) {
@@ -120,9 +153,11 @@ public final class BoardSolver {
                 OperatingPoint p = c.point();
                 allowed = spec.allowedPowerW(p);
                 surges = surgeAt[k] ? SurgeChecks.at(spec, inst, p) : List.of();
-                if (surges.stream().anyMatch(sr -> sr.stopped().isPresent())) {
-                    // A surge transient that stopped before its end gives partial values only: the position has no
-                    // answer the tool can stand behind (exit status 3), though its other checks are still shown.
+                if (surges.stream().anyMatch(sr -> sr.stopped().isPresent()
+                        && sr.stopped().get() != ClampTransientOutcome.Reason.JUNCTION_RUNAWAY)) {
+                    // A surge transient that stopped for numerical reasons gives partial values only: the position
+                    // has no answer the tool can stand behind (exit status 3), though its other checks are still
+                    // shown. Runaway within the pulse is a physical answer: its peak Tj fails the surge rules.
                     status = status.worse(PointStatus.NOT_CONVERGED);
                 }
                 ctx = Measurements.of(spec, inst, p, allowed, resistorAllowed, surges);
@@ -167,15 +202,22 @@ public final class BoardSolver {
     }
 
     /** Heat of the board with the air at {@code tLocalK}: every position at its corner of greatest heat. */
-    private static double boardHeatW(PreparedBoard board, double tLocalK, SolverSettings settings) {
+    private static double boardHeatW(PreparedBoard board, double tLocalK, SolverSettings settings, LastHeat last) {
         double sum = 0;
+        List<List<ThermalOutcome>> all = new ArrayList<>(board.instances().size());
         for (List<PositionInstance> insts : board.instances()) {
             double max = 0;
+            List<ThermalOutcome> outs = new ArrayList<>(insts.size());
             for (PositionInstance inst : insts) {
-                max = Math.max(max, heatOf(inst, inst.solve(tLocalK, settings), settings));
+                ThermalOutcome out = inst.solve(tLocalK, settings);
+                outs.add(out);
+                max = Math.max(max, heatOf(inst, out, settings));
             }
+            all.add(outs);
             sum += max;
         }
+        last.tLocalK = tLocalK;
+        last.outcomes = all;
         return sum;
     }
 

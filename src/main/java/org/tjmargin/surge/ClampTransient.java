@@ -36,6 +36,15 @@ import org.tjmargin.thermal.FosterStep;
 public final class ClampTransient {
 
     /**
+     * Junction temperature (K) above which a surge is stopped as thermal runaway within the pulse. Deliberately far
+     * above destruction (a diode is gone well below 1000 °C; the surge rules fail such pulses from their peak Tj):
+     * the cap only ends integrations that would otherwise chase an unbounded rise to overflow, while closed-form
+     * checks of linear models with large but bounded rises still complete. 1e5 K, a modelling choice.
+     */
+    public static final double RUNAWAY_CAP_K = 1e5;
+
+
+    /**
      * Below this fraction of the peak, values are error-controlled absolutely (to the tolerance times this
      * fraction of the peak) rather than relative to themselves: a power law from zero ({@code t³} of the 8/20
      * current) or the kink where conduction starts has a chord error that is a fixed fraction of the local value
@@ -266,6 +275,10 @@ public final class ClampTransient {
                     p0 = p1;
                     record(t, i1, v1, p1, tj);
                     steps++;
+                    if (tj > RUNAWAY_CAP_K) {
+                        // The junction heats without bound during the pulse: the part is destroyed long before.
+                        return stopped(ClampTransientOutcome.Reason.JUNCTION_RUNAWAY, t, hh, tj, 0);
+                    }
                     if (steps >= settings.maxSteps() && t < duration) {
                         return stopped(ClampTransientOutcome.Reason.STEP_BUDGET_EXHAUSTED, t, hh, tj, 0);
                     }

@@ -13,7 +13,10 @@ public sealed interface ClampTransientOutcome permits ClampTransientOutcome.Comp
         /** the junction-temperature fixed point did not converge even at the smallest step */
         COUPLING_NOT_CONVERGED,
         /** the error control asked for a step below the smallest allowed (a discontinuity off the breakpoints) */
-        STEP_TOO_SMALL
+        STEP_TOO_SMALL,
+        /** the junction passed {@link ClampTransient#RUNAWAY_CAP_K} during the pulse: a physical outcome (the part
+         * fails), not a numerical one; the partial result carries the temperature reached */
+        JUNCTION_RUNAWAY
     }
 
     /** @return the result, partial (up to {@link ClampTransientResult#endTimeS()}) when stopped */

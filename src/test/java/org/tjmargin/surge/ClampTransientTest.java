@@ -147,8 +147,9 @@ class ClampTransientTest {
 
     @Test
     void randomSurgesGiveFiniteConsistentResults() {
-        long seed = System.nanoTime();
+        long seed = 8276134713227L; // fixed: this seed contains pulses that run away (trial 14 among them)
         Random random = new Random(seed);
+        int ranAway = 0;
         for (int trial = 0; trial < 30; trial++) {
             String where = "seed " + seed + ", trial " + trial;
             double vbr = 5 + 300 * random.nextDouble();
@@ -166,6 +167,14 @@ class ClampTransientTest {
             };
             double startTj = 298.15 + 100 * random.nextDouble();
             ClampTransientOutcome outcome = ClampTransient.solve(source, clamp, net, startTj, TransientSettings.defaults());
+            if (outcome instanceof ClampTransientOutcome.Stopped st) {
+                // An ideal current source into a clamp whose voltage rises with Tj can heat without bound; that
+                // must end as runaway above the cap, never as a numerical stop.
+                assertEquals(ClampTransientOutcome.Reason.JUNCTION_RUNAWAY, st.reason(), where);
+                assertTrue(st.lastJunctionTemperatureK() > ClampTransient.RUNAWAY_CAP_K, where);
+                ranAway++;
+                continue;
+            }
             ClampTransientResult r = assertInstanceOf(ClampTransientOutcome.Completed.class, outcome, where).result();
             assertTrue(r.energyJ() >= 0 && r.chargeC() >= 0 && r.actionIntegralA2s() >= 0, where);
             assertTrue(r.peakJunctionTemperatureK() >= startTj, where);
@@ -179,5 +188,6 @@ class ClampTransientTest {
                 assertTrue(hot.peakCurrentA() <= r.peakCurrentA() + 1e-12, where + " (" + th + ")");
             }
         }
+        assertTrue(ranAway >= 1 && ranAway < 30, "seed " + seed + ": " + ranAway + " runaways; the seed has both kinds");
     }
 }

@@ -131,7 +131,7 @@ class FosterNetworkTest {
 
     @Test
     void responseIsLinearInPowerAndZthRisesMonotonically() {
-        long seed = System.nanoTime();
+        long seed = 20261202L; // fixed, so that every run checks the same cases
         Random random = new Random(seed);
         for (int trial = 0; trial < 200; trial++) {
             int n = 1 + random.nextInt(4);

@@ -39,7 +39,7 @@ class FosterPulseTest {
 
     @Test
     void peakSearchFindsTheMaximumOfRandomNetworks() {
-        long seed = System.nanoTime();
+        long seed = 20261202L; // fixed, so that every run checks the same cases
         Random random = new Random(seed);
         for (int trial = 0; trial < 50; trial++) {
             int n = 1 + random.nextInt(4);
