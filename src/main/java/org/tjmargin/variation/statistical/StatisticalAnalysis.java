@@ -54,14 +54,20 @@ public final class StatisticalAnalysis {
                                        StatisticsProgress progress) {
         List<PositionSpec> specs = result.board().positions();
         int[] ambients = yieldIndices(result.sweep().size(), plan.yieldPoints());
-        long total = 0;
-        for (PositionSpec s : specs) {
-            total += samplesOf(s, plan, ambients.length);
-        }
-        Work work = new Work(progress, total);
+        Work work = new Work(progress, totalSamples(result, plan));
         List<PositionStatistics> out = IntStream.range(0, specs.size()).parallel()
                 .mapToObj(i -> position(result, i, plan, solver, ambients, work)).toList();
         return new StatisticsResult(plan, out);
+    }
+
+    /** Samples the whole statistics of {@code result}'s board draw under {@code plan}: the unit of its progress. */
+    public static long totalSamples(AnalysisResult result, StatisticsPlan plan) {
+        int points = yieldIndices(result.sweep().size(), plan.yieldPoints()).length;
+        long total = 0;
+        for (PositionSpec s : result.board().positions()) {
+            total += samplesOf(s, plan, points);
+        }
+        return total;
     }
 
     /** Samples one position draws: the highest-ambient run and the yield curve's other points. */
