@@ -114,6 +114,10 @@ public final class AnalyseCommand implements Callable<Integer> {
         AnalysisResult result;
         Optional<StatisticsResult> stats = Optional.empty();
         boolean runStatistics = !noStatistics && (loaded.statistics().isPresent() || samples != null);
+        List<String> cautions;
+        String resultsJson;
+        List<RenderedChart> charts;
+        // The bar stays up until every file is written and is cleared before the table is printed.
         try (ProgressBar progress = ProgressBar.start(err, !quiet && System.console() != null)) {
             progress.phase("corner analysis");
             result = Analysis.run(loaded.board(), policy, SolverSettings.DEFAULT);
@@ -123,30 +127,30 @@ public final class AnalyseCommand implements Callable<Integer> {
                 stats = Optional.of(StatisticalAnalysis.run(result, plan, SolverSettings.DEFAULT, progress));
             }
             progress.phase("charts and report");
-        }
-        List<String> cautions = Cautions.forResult(result);
-        List<InputFile> allInputs = new java.util.ArrayList<>(loaded.inputs());
-        allInputs.addAll(loadedPolicy.inputs());
-        ReportInputs provenance = new ReportInputs(VersionProvider.version(), cautions, allInputs.stream()
-                .map(f -> new ReportInputs.InputDigest(f.path().toString(), f.sha256())).toList());
-        String resultsJson = ResultsJson.render(result, stats, provenance);
-        List<RenderedChart> charts = ChartSet.render(result);
-        OutputFiles files = new OutputFiles()
-                .text("results.json", resultsJson)
-                .text("sweep.csv", SweepCsv.render(result))
-                .text("report.html", HtmlReport.render(result, provenance, charts));
-        if (stats.isPresent()) {
-            files.text("spread.csv", StatisticsCsv.spread(stats.get()))
-                    .text("yield.csv", StatisticsCsv.yield(stats.get()))
-                    .text("sensitivity.csv", StatisticsCsv.sensitivity(result, stats.get()));
-        }
-        for (RenderedChart c : charts) {
-            files.bytes(c.pngFileName(), c.png()).text(c.svgFileName(), c.svg());
-        }
-        try {
+            cautions = Cautions.forResult(result);
+            List<InputFile> allInputs = new java.util.ArrayList<>(loaded.inputs());
+            allInputs.addAll(loadedPolicy.inputs());
+            ReportInputs provenance = new ReportInputs(VersionProvider.version(), cautions, allInputs.stream()
+                    .map(f -> new ReportInputs.InputDigest(f.path().toString(), f.sha256())).toList());
+            resultsJson = ResultsJson.render(result, stats, provenance);
+            charts = ChartSet.render(result);
+            OutputFiles files = new OutputFiles()
+                    .text("results.json", resultsJson)
+                    .text("sweep.csv", SweepCsv.render(result))
+                    .text("report.html", HtmlReport.render(result, provenance, charts));
+            if (stats.isPresent()) {
+                files.text("spread.csv", StatisticsCsv.spread(stats.get()))
+                        .text("yield.csv", StatisticsCsv.yield(stats.get()))
+                        .text("sensitivity.csv", StatisticsCsv.sensitivity(result, stats.get()));
+            }
+            for (RenderedChart c : charts) {
+                files.bytes(c.pngFileName(), c.png()).text(c.svgFileName(), c.svg());
+            }
+            progress.phase("writing");
             List<Path> inputs = allInputs.stream().map(InputFile::path).toList();
             Path clash = files.wouldOverwrite(out, inputs);
             if (clash != null) {
+                progress.close();
                 err.println(out + ": the output folder would overwrite the input file " + clash
                         + "; choose another --out; nothing written");
                 return ExitCodes.INVALID_INPUT;
