@@ -12,6 +12,7 @@ import org.tjmargin.variation.statistical.AxisSensitivity;
 import org.tjmargin.variation.statistical.MonteCarloResult;
 import org.tjmargin.variation.statistical.PositionStatistics;
 import org.tjmargin.variation.statistical.RssOutcome;
+import org.tjmargin.variation.statistical.RuleViolation;
 import org.tjmargin.variation.statistical.StatisticsResult;
 import org.tjmargin.variation.statistical.TornadoBar;
 import org.tjmargin.variation.statistical.YieldPoint;
@@ -37,7 +38,7 @@ public final class StatisticsCsv {
 
     /** Header of {@code yield.csv}. */
     public static final String[] YIELD_HEADER = {"position", "ambientC", "tLocalC", "yield", "yieldLower",
-        "yieldUpper", "samples", "rules"};
+        "yieldUpper", "samples", "rules", "mostViolatedRule", "itsProbability"};
 
     /** Header of {@code sensitivity.csv}. */
     public static final String[] SENSITIVITY_HEADER = {"position", "rank", "axis", "input", "unit", "low", "high",
@@ -79,8 +80,11 @@ public final class StatisticsCsv {
         return print(YIELD_HEADER, csv -> {
             for (PositionStatistics p : s.positions()) {
                 for (YieldPoint y : p.yield()) {
+                    var worst = y.mostViolated();
                     csv.printRecord(p.positionId(), Labels.celsius(y.ambientK()), Labels.celsius(y.tLocalK()),
-                            y.yield(), y.wilsonLo(), y.wilsonHi(), y.samples(), "steady-state");
+                            y.yield(), y.wilsonLo(), y.wilsonHi(), y.samples(), "steady-state",
+                            worst.map(RuleViolation::ruleId).orElse(""),
+                            worst.map(w -> (Object) w.probability().estimate()).orElse(""));
                 }
             }
         });

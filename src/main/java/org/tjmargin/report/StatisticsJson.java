@@ -75,9 +75,13 @@ final class StatisticsJson {
         y.put("rules", StatisticsText.YIELD_RULES);
         ArrayNode pts = y.putArray("points");
         for (YieldPoint p : s.yield()) {
-            pts.addObject().put("ambientC", Labels.celsius(p.ambientK())).put("tLocalC", Labels.celsius(p.tLocalK()))
-                    .put("yield", p.yield()).put("lower", p.wilsonLo()).put("upper", p.wilsonHi())
-                    .put("samples", p.samples());
+            ObjectNode pt = pts.addObject().put("ambientC", Labels.celsius(p.ambientK()))
+                    .put("tLocalC", Labels.celsius(p.tLocalK())).put("yield", p.yield()).put("lower", p.wilsonLo())
+                    .put("upper", p.wilsonHi()).put("samples", p.samples());
+            ArrayNode pr = pt.putArray("rules");
+            for (RuleViolation v : p.rules()) {
+                pr.addObject().put("id", v.ruleId()).setAll(interval(mapper, v.probability()));
+            }
         }
         return o;
     }

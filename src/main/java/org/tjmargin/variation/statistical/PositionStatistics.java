@@ -14,7 +14,8 @@ import java.util.List;
  * @param monteCarlo     Monte Carlo at that ambient, surges included where {@code surgesIncluded}
  * @param surgesIncluded true when the run at the highest ambient ran the position's surges on every sample
  * @param tornado        each input swung over its range, the others nominal, ranked by its effect on the margin
- * @param yield          the probability of passing the steady-state rules at each ambient of the yield curve
+ * @param yield          the probability of passing the steady-state rules, and of violating each, at each ambient
+ *                       of the yield curve
  *                       (surges are not run there: see {@link StatisticalAnalysis})
  */
 public record PositionStatistics(String positionId, double ambientK, double tLocalK, CornerExtremes corners,

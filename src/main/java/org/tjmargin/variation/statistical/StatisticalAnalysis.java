@@ -117,7 +117,7 @@ public final class StatisticalAnalysis {
             if (k == last && !surges) {
                 WilsonInterval y = mc.yield();
                 return new YieldPoint(hottest.ambientK(), at.tLocalK(), y.estimate(), y.lower(), y.upper(),
-                        y.trials());
+                        y.trials(), mc.rules());
             }
             YieldPoint p = YieldCurve.at(result.sweep().get(k), i, spec, policy, model, plan.settings(), solver);
             work.done(plan.settings().samples());

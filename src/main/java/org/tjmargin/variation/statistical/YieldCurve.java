@@ -43,6 +43,6 @@ public final class YieldCurve {
         }
         MonteCarloResult r = MonteCarlo.run(new PointEvaluator(spec, policy, p.tLocalK(), solver), model, settings);
         WilsonInterval y = r.yield();
-        return new YieldPoint(b.ambientK(), p.tLocalK(), y.estimate(), y.lower(), y.upper(), y.trials());
+        return new YieldPoint(b.ambientK(), p.tLocalK(), y.estimate(), y.lower(), y.upper(), y.trials(), r.rules());
     }
 }
