@@ -143,7 +143,8 @@ final class ChartHistogram {
             }
         }
         lines.add(ChartStatisticsData.air());
-        double pad = 0.04 * (xHi - xLo);
+        // A millionth of the magnitude at least, as the run's own bins (see Bins.around): never an empty range.
+        double pad = Math.max(0.04 * (xHi - xLo), 1e-6 * Math.max(Math.abs(xLo), Math.abs(xHi)));
         xLo -= pad;
         xHi += pad;
 

@@ -123,7 +123,9 @@ final class ChartTornado {
         } else {
             subtitles.add("Zero margin (the limit) is off the axis " + (lo > 0 ? "to the left." : "to the right."));
         }
-        double pad = Math.max(0.5, 0.06 * (xHi - xLo));
+        // Half a percentage point at least, and a millionth of the magnitude: a stand-in margin near −1e17 % (a
+        // rating fallen to zero) is spaced 16 apart in doubles, and a smaller pad would give an empty axis range.
+        double pad = Math.max(Math.max(0.5, 0.06 * (xHi - xLo)), 1e-6 * Math.max(Math.abs(xLo), Math.abs(xHi)));
         margin.setRange(xLo - pad, xHi + pad);
         plot.addRangeMarker(ChartData.vertical(nominal, Palette.INK, Palette.nominalLine(), "nominal "
                 + HtmlFormat.margin(t.nominal().margin()), ChartData.LabelAt.BOTTOM, xLo - pad, xHi + pad),

@@ -26,8 +26,8 @@ import org.tjmargin.variation.statistical.StatisticsResult;
  * The review report: one self-contained HTML page (inline CSS and inline SVG charts; no script, no external file, no
  * web font) that a design reviewer reads from top to bottom: the verdict, a table of every position, a section per
  * position (inputs, estimates, assumptions, operating points at every corner at the design's highest ambient, the
- * margin of every rule, regulation, runaway, charts), the policy, the safety cautions, and the provenance of the
- * inputs.
+ * margin of every rule, regulation, runaway, charts and, with statistics, the statistical spread), the policy, the
+ * safety cautions, and the provenance of the inputs.
  *
  * <p>Text comes from the Mustache templates in {@code src/main/resources/org/tjmargin/report/}; every value is
  * HTML-escaped by the template engine ({@code {{value}}}), except the SVG of the charts, which this tool drew itself
