@@ -133,11 +133,11 @@ public final class AnalyseCommand implements Callable<Integer> {
             ReportInputs provenance = new ReportInputs(VersionProvider.version(), cautions, allInputs.stream()
                     .map(f -> new ReportInputs.InputDigest(f.path().toString(), f.sha256())).toList());
             resultsJson = ResultsJson.render(result, stats, provenance);
-            charts = ChartSet.render(result);
+            charts = ChartSet.render(result, stats);
             OutputFiles files = new OutputFiles()
                     .text("results.json", resultsJson)
                     .text("sweep.csv", SweepCsv.render(result))
-                    .text("report.html", HtmlReport.render(result, provenance, charts));
+                    .text("report.html", HtmlReport.render(result, stats, provenance, charts));
             if (stats.isPresent()) {
                 files.text("spread.csv", StatisticsCsv.spread(stats.get()))
                         .text("yield.csv", StatisticsCsv.yield(stats.get()))
