@@ -1,6 +1,7 @@
 package org.tjmargin.circuit;
 
 import org.tjmargin.device.BreakdownDiode;
+import org.tjmargin.device.PreparedDiode;
 
 /**
  * A circuit around one breakdown diode. Implementations are immutable values; {@link #at} is a pure function.
@@ -14,6 +15,18 @@ public interface Circuit {
      * @param tjK   junction temperature (K)
      * @return the operating point
      */
-    CircuitPoint at(BreakdownDiode diode, double tjK);
+    default CircuitPoint at(BreakdownDiode diode, double tjK) {
+        return at(PreparedDiode.of(diode), tjK);
+    }
+
+    /**
+     * The same for a diode whose temperature-independent constants were computed once (what a solver evaluating
+     * one diode at many temperatures passes); the result equals {@link #at(BreakdownDiode, double)}'s bit for bit.
+     *
+     * @param diode the diode, prepared
+     * @param tjK   junction temperature (K)
+     * @return the operating point
+     */
+    CircuitPoint at(PreparedDiode diode, double tjK);
 
 }

@@ -1,6 +1,6 @@
 package org.tjmargin.circuit;
 
-import org.tjmargin.device.BreakdownDiode;
+import org.tjmargin.device.PreparedDiode;
 
 /**
  * A diode fed from a current source (a reference biased by a current mirror or a constant-current stage).
@@ -16,7 +16,7 @@ public record CurrentFedDiode(double currentA) implements Circuit {
     }
 
     @Override
-    public CircuitPoint at(BreakdownDiode diode, double tjK) {
+    public CircuitPoint at(PreparedDiode diode, double tjK) {
         // The total reverse current rises monotonically with voltage: bisection for the voltage that carries the
         // feed current, between 0 and the voltage the breakdown branch alone would need (200 halvings reach
         // double resolution).

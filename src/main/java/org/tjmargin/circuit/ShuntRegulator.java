@@ -1,6 +1,6 @@
 package org.tjmargin.circuit;
 
-import org.tjmargin.device.BreakdownDiode;
+import org.tjmargin.device.PreparedDiode;
 
 /**
  * The shunt regulator: supply {@code Vs} through a series resistor {@code Rs} into the diode, the load across the
@@ -28,7 +28,7 @@ public record ShuntRegulator(double supplyV, double seriesOhm, Load load) implem
     }
 
     @Override
-    public CircuitPoint at(BreakdownDiode diode, double tjK) {
+    public CircuitPoint at(PreparedDiode diode, double tjK) {
         double vth;
         double rth;
         if (load instanceof Load.Resistive r) {
@@ -43,7 +43,7 @@ public record ShuntRegulator(double supplyV, double seriesOhm, Load load) implem
         double iz = s[1];
         double drop = supplyV - v;
         double il = load instanceof Load.Resistive r ? v / r.resistanceOhm() : Math.max(0.0, drop / seriesOhm - iz);
-        return new CircuitPoint(v, iz, v * iz, drop * drop / seriesOhm, il, Region.values()[(int) s[2]]);
+        return new CircuitPoint(v, iz, v * iz, drop * drop / seriesOhm, il, Region.ofOrdinal((int) s[2]));
     }
 
 

@@ -1,6 +1,6 @@
 package org.tjmargin.circuit;
 
-import org.tjmargin.device.BreakdownDiode;
+import org.tjmargin.device.PreparedDiode;
 
 /**
  * A clamp across a DC line at its working (standoff) voltage: normally blocking, dissipating only its leakage,
@@ -23,10 +23,10 @@ public record StandoffClamp(double lineV, double sourceOhm) implements Circuit {
     }
 
     @Override
-    public CircuitPoint at(BreakdownDiode diode, double tjK) {
+    public CircuitPoint at(PreparedDiode diode, double tjK) {
         double[] s = TheveninDrive.solve(diode, tjK, lineV, sourceOhm);
         double i = s[1];
-        return new CircuitPoint(s[0], i, s[0] * i, i * i * sourceOhm, 0.0, Region.values()[(int) s[2]]);
+        return new CircuitPoint(s[0], i, s[0] * i, i * i * sourceOhm, 0.0, Region.ofOrdinal((int) s[2]));
     }
 
 }

@@ -1,6 +1,6 @@
 package org.tjmargin.circuit;
 
-import org.tjmargin.device.BreakdownDiode;
+import org.tjmargin.device.PreparedDiode;
 
 /**
  * The diode driven by a Thevenin source {@code (Vth, Rth)}: the one place where the breakdown characteristic meets
@@ -26,7 +26,7 @@ final class TheveninDrive {
      *
      * @return {@code {voltageV, currentA, regionOrdinal}}
      */
-    static double[] solve(BreakdownDiode d, double tjK, double vthV, double rthOhm) {
+    static double[] solve(PreparedDiode d, double tjK, double vthV, double rthOhm) {
         double g = d.excessLeakageConductanceS(tjK);
         if (rthOhm == 0) {
             double v = Math.max(0.0, vthV);
@@ -44,14 +44,14 @@ final class TheveninDrive {
         return solveCharacteristic(d, tjK, vthV, rthOhm);
     }
 
-    private static double regionAt(BreakdownDiode d, double tjK, double v) {
+    private static double regionAt(PreparedDiode d, double tjK, double v) {
         if (v < d.kneeVoltageV(tjK)) {
             return Region.BELOW_KNEE.ordinal();
         }
         return (v - d.vz0V(tjK)) / d.rzOhm() >= d.lineStartA() ? Region.BREAKDOWN.ordinal() : Region.KNEE.ordinal();
     }
 
-    private static double[] solveCharacteristic(BreakdownDiode d, double tjK, double vthV, double rthOhm) {
+    private static double[] solveCharacteristic(PreparedDiode d, double tjK, double vthV, double rthOhm) {
         double vz0 = d.vz0V(tjK);
         double lineI = (vthV - vz0) / (rthOhm + d.rzOhm());
         if (lineI >= d.lineStartA()) {

@@ -88,7 +88,10 @@ public record Policy(String name, String provenance, List<Rule> rules) {
     public List<RuleCheck> check(RuleContext context) {
         List<RuleCheck> out = new ArrayList<>(rules.size());
         for (Rule r : rules) {
-            r.check(context).ifPresent(out::add);
+            RuleCheck c = r.checkOrNull(context);
+            if (c != null) {
+                out.add(c);
+            }
         }
         return out;
     }

@@ -1,7 +1,6 @@
 package org.tjmargin.derating;
 
 import java.util.Optional;
-import java.util.OptionalDouble;
 import org.tjmargin.device.Celsius;
 
 /**
@@ -39,14 +38,18 @@ public record Rule(String id, String title, Measure measure, Bound bound, Limit 
      * @return the check, or empty when the rule's quantity does not apply to this point
      */
     public Optional<RuleCheck> check(RuleContext context) {
-        OptionalDouble v = context.value(measure);
-        if (v.isEmpty()) {
-            return Optional.empty();
+        return Optional.ofNullable(checkOrNull(context));
+    }
+
+    /** As {@link #check}, with {@code null} for a quantity that does not apply (no Optional per rule per corner). */
+    RuleCheck checkOrNull(RuleContext context) {
+        double actual = context.valueOrNaN(measure);
+        if (Double.isNaN(actual)) {
+            return null;
         }
-        double actual = v.getAsDouble();
         double lim = limit.valueFor(context);
-        return Optional.of(new RuleCheck(id, measure, bound, actual, lim, marginOf(actual, lim),
-                bound == Bound.MAX ? lim - actual : actual - lim));
+        return new RuleCheck(id, measure, bound, actual, lim, marginOf(actual, lim),
+                bound == Bound.MAX ? lim - actual : actual - lim);
     }
 
     /** The relative margin of {@code actual} against {@code limit} under this rule's bound and measure. */

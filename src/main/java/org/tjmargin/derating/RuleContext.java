@@ -1,6 +1,5 @@
 package org.tjmargin.derating;
 
-import java.util.EnumMap;
 import java.util.Map;
 import java.util.OptionalDouble;
 
@@ -16,21 +15,18 @@ import java.util.OptionalDouble;
 public record RuleContext(Map<Measure, Double> values, double tjMaxK, double referenceK, double tLocalK) {
 
     public RuleContext {
-        EnumMap<Measure, Double> copy = new EnumMap<>(Measure.class);
-        for (Map.Entry<Measure, Double> e : values.entrySet()) {
-            if (!Double.isFinite(e.getValue())) {
-                throw new IllegalArgumentException(e.getKey() + " must be finite, got " + e.getValue());
-            }
-            copy.put(e.getKey(), e.getValue());
-        }
-        // An unmodifiable view of the EnumMap: lookups by ordinal, no hashing (this runs for every corner).
-        values = java.util.Collections.unmodifiableMap(copy);
+        // Array-backed and immutable: lookups by ordinal, no hashing or boxing (this runs for every rule of every
+        // corner). Values built by a MeasureValues.Builder are taken as they are.
+        values = MeasureValues.copyOf(values);
     }
 
     /** The temperature a temperature-dependent limit is read at. */
     public double temperatureK(Limit.Basis basis) {
         return switch (basis) {
-            case JUNCTION -> values.getOrDefault(Measure.JUNCTION_TEMPERATURE, referenceK);
+            case JUNCTION -> {
+                double tj = valueOrNaN(Measure.JUNCTION_TEMPERATURE);
+                yield Double.isNaN(tj) ? referenceK : tj;
+            }
             case REFERENCE -> referenceK;
             case LOCAL_AIR -> tLocalK;
         };
@@ -38,7 +34,12 @@ public record RuleContext(Map<Measure, Double> values, double tjMaxK, double ref
 
     /** The value of {@code m}, if it applies here. */
     public OptionalDouble value(Measure m) {
-        Double v = values.get(m);
-        return v == null ? OptionalDouble.empty() : OptionalDouble.of(v);
+        double v = valueOrNaN(m);
+        return Double.isNaN(v) ? OptionalDouble.empty() : OptionalDouble.of(v);
+    }
+
+    /** The value of {@code m}, or {@code NaN} where it does not apply (values held are always finite). */
+    public double valueOrNaN(Measure m) {
+        return ((MeasureValues) values).valueOrNaN(m);
     }
 }

@@ -1,7 +1,7 @@
 package org.tjmargin.report;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.tjmargin.solve.PositionSpec;
 import org.tjmargin.variation.Histogram;
@@ -29,8 +29,8 @@ final class StatisticsJson {
     }
 
     /** The run's budget and methods. */
-    static ObjectNode plan(ObjectMapper mapper, StatisticsPlan plan) {
-        ObjectNode o = mapper.createObjectNode();
+    static ObjectNode plan(JsonNodeFactory mapper, StatisticsPlan plan) {
+        ObjectNode o = mapper.objectNode();
         o.put("samples", plan.settings().samples());
         o.put("seed", plan.settings().seed());
         o.put("blockSize", plan.settings().blockSize());
@@ -43,8 +43,8 @@ final class StatisticsJson {
     }
 
     /** One position's statistics. */
-    static ObjectNode position(ObjectMapper mapper, PositionSpec spec, PositionStatistics s) {
-        ObjectNode o = mapper.createObjectNode();
+    static ObjectNode position(JsonNodeFactory mapper, PositionSpec spec, PositionStatistics s) {
+        ObjectNode o = mapper.objectNode();
         o.put("ambientC", Labels.celsius(s.ambientK()));
         o.put("tLocalC", Labels.celsius(s.tLocalK()));
         ObjectNode c = o.putObject("corners");
@@ -86,8 +86,8 @@ final class StatisticsJson {
         return o;
     }
 
-    private static ObjectNode rss(ObjectMapper mapper, PositionSpec spec, RssOutcome rss) {
-        ObjectNode o = mapper.createObjectNode();
+    private static ObjectNode rss(JsonNodeFactory mapper, PositionSpec spec, RssOutcome rss) {
+        ObjectNode o = mapper.objectNode();
         o.put("method", RssOutcome.METHOD);
         if (rss instanceof RssOutcome.Spread sp) {
             o.put("nominalTjC", Labels.celsius(sp.nominalTjK()));
@@ -115,9 +115,9 @@ final class StatisticsJson {
         return o;
     }
 
-    private static ObjectNode monteCarlo(ObjectMapper mapper, PositionSpec spec, MonteCarloResult mc,
+    private static ObjectNode monteCarlo(JsonNodeFactory mapper, PositionSpec spec, MonteCarloResult mc,
                                          boolean surges) {
-        ObjectNode o = mapper.createObjectNode();
+        ObjectNode o = mapper.objectNode();
         o.put("method", StatisticsText.MONTE_CARLO);
         o.put("samples", mc.settings().samples());
         o.put("seed", mc.settings().seed());
@@ -151,13 +151,13 @@ final class StatisticsJson {
         return o;
     }
 
-    private static ObjectNode interval(ObjectMapper mapper, WilsonInterval w) {
-        return mapper.createObjectNode().put("probability", w.estimate()).put("lower", w.lower())
+    private static ObjectNode interval(JsonNodeFactory mapper, WilsonInterval w) {
+        return mapper.objectNode().put("probability", w.estimate()).put("lower", w.lower())
                 .put("upper", w.upper()).put("count", w.successes()).put("samples", w.trials());
     }
 
-    private static ObjectNode histogram(ObjectMapper mapper, Histogram h, boolean temperature) {
-        ObjectNode o = mapper.createObjectNode();
+    private static ObjectNode histogram(JsonNodeFactory mapper, Histogram h, boolean temperature) {
+        ObjectNode o = mapper.objectNode();
         o.put("lo", temperature ? Labels.celsius(h.lo()) : h.lo());
         o.put("hi", temperature ? Labels.celsius(h.hi()) : h.hi());
         o.put("binWidth", h.binWidth());
@@ -170,8 +170,8 @@ final class StatisticsJson {
         return o;
     }
 
-    private static ObjectNode evaluation(ObjectMapper mapper, Evaluation e) {
-        return mapper.createObjectNode().put("status", e.status().name()).put("tjC", Labels.celsius(e.tjK()))
+    private static ObjectNode evaluation(JsonNodeFactory mapper, Evaluation e) {
+        return mapper.objectNode().put("status", e.status().name()).put("tjC", Labels.celsius(e.tjK()))
                 .put("margin", e.margin()).put("limitingRule", e.limitingRuleId()).put("passes", e.passes());
     }
 

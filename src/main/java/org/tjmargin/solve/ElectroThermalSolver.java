@@ -3,6 +3,7 @@ package org.tjmargin.solve;
 import org.tjmargin.circuit.Circuit;
 import org.tjmargin.circuit.CircuitPoint;
 import org.tjmargin.device.BreakdownDiode;
+import org.tjmargin.device.PreparedDiode;
 import org.tjmargin.thermal.SteadyThermalPath;
 
 /**
@@ -32,27 +33,50 @@ public final class ElectroThermalSolver {
     public static ThermalOutcome solve(Circuit circuit, BreakdownDiode diode, SteadyThermalPath path, double tLocalK,
                                        SolverSettings settings) {
         final double rTheta = path.rThetaJaKPerW();
-        // The last circuit point, so that the point at the root (usually the last one evaluated before the loop
-        // gain) is not solved again. Local to this call: the solver stays thread-safe.
-        final CircuitPoint[] last = new CircuitPoint[1];
-        final double[] lastTj = {Double.NaN};
+        // The knee and leakage constants once per solve, not once per evaluation (equal results, see PreparedDiode).
+        final PreparedDiode prepared = PreparedDiode.of(diode);
+        // The circuit points of the last evaluations, so that the point at the root (evaluated just before the two
+        // of the loop gain) is not solved again. Local to this call: the solver stays thread-safe.
+        final Recent recent = new Recent();
         FixedPointOutcome outcome = LowestFixedPoint.find(tj -> {
-            CircuitPoint cp = circuit.at(diode, tj);
-            last[0] = cp;
-            lastTj[0] = tj;
+            CircuitPoint cp = circuit.at(prepared, tj);
+            recent.keep(tj, cp);
             return tLocalK + rTheta * cp.diodePowerW();
         }, tLocalK, settings);
         if (outcome instanceof FixedPointOutcome.Root r) {
-            boolean cached = lastTj[0] == r.x();
-            CircuitPoint cp = cached ? last[0] : circuit.at(diode, r.x());
+            CircuitPoint kept = recent.at(r.x());
+            CircuitPoint cp = kept != null ? kept : circuit.at(prepared, r.x());
             double refK = path.referenceTemperatureK(r.x(), cp.diodePowerW());
-            return new ThermalOutcome.Converged(
-                    new OperatingPoint(r.x(), tLocalK, refK, cp, r.evaluations() + (cached ? 0 : 1), r.loopGain(), r.residual()));
+            return new ThermalOutcome.Converged(new OperatingPoint(r.x(), tLocalK, refK, cp,
+                    r.evaluations() + (kept != null ? 0 : 1), r.loopGain(), r.residual()));
         }
         if (outcome instanceof FixedPointOutcome.Runaway) {
             return new ThermalOutcome.Runaway(tLocalK, settings.capK());
         }
         FixedPointOutcome.Exhausted e = (FixedPointOutcome.Exhausted) outcome;
         return new ThermalOutcome.NotConverged(tLocalK, e.lastX(), e.residual(), e.evaluations());
+    }
+
+    /** The circuit points of the last three evaluations of one solve, by junction temperature. */
+    private static final class Recent {
+        private final double[] tjK = {Double.NaN, Double.NaN, Double.NaN};
+        private final CircuitPoint[] points = new CircuitPoint[3];
+        private int next;
+
+        void keep(double tj, CircuitPoint cp) {
+            tjK[next] = tj;
+            points[next] = cp;
+            next = (next + 1) % 3;
+        }
+
+        /** The point kept at exactly {@code tj}, or null. */
+        CircuitPoint at(double tj) {
+            for (int i = 0; i < 3; i++) {
+                if (tjK[i] == tj) {
+                    return points[i];
+                }
+            }
+            return null;
+        }
     }
 }

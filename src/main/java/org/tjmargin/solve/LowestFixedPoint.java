@@ -1,9 +1,6 @@
 package org.tjmargin.solve;
 
 import java.util.function.DoubleUnaryOperator;
-import org.apache.commons.math3.analysis.solvers.AllowedSolution;
-import org.apache.commons.math3.analysis.solvers.PegasusSolver;
-import org.apache.commons.math3.exception.MathIllegalStateException;
 
 /**
  * The lowest fixed point {@code x* = F(x*)} at or above a start {@code x0} with {@code F(x0) ≥ x0}: the state a
@@ -19,9 +16,13 @@ import org.apache.commons.math3.exception.MathIllegalStateException;
  *   roots to a higher one.</li>
  *   <li>If a step lands where {@code g ≥ 0}, the lowest root is bracketed and the Pegasus method finishes it
  *   (M. Dowell and P. Jarratt, "The 'Pegasus' method for computing the root of an equation", BIT 12 (1972)
- *   503–508; the Commons Math {@link PegasusSolver}): a bracketing secant method that keeps the bracket, converges
- *   superlinearly, and stops on the residual, which is what the heat balance is held to. Brent's method, which
- *   stops only when the bracket itself has shrunk to the tolerance, spent about twice the evaluations here.</li>
+ *   503–508): a bracketing secant method that keeps the bracket, converges superlinearly, and stops on the
+ *   residual, which is what the heat balance is held to. Brent's method, which stops only when the bracket itself
+ *   has shrunk to the tolerance, spent about twice the evaluations here. The iteration is the one of the Commons
+ *   Math {@code PegasusSolver} (3.6.1, {@code BaseSecantSolver.doSolve}, any side), step for step, but it starts
+ *   from the values of {@code g} at the bracket's ends that the search already has: the library evaluates both
+ *   ends twice more (once to verify the bracket) and the returned root once more, five evaluations of the
+ *   circuit per bracketed solve that change nothing. {@code LowestFixedPointTest} holds the two equal.</li>
  * </ul>
  * Every step is capped at {@link SolverSettings#maxStepK()}, because when {@code P} first falls and later rises
  * with temperature (a regulator whose clamp-like leakage takes over when hot) one long step could land beyond a
@@ -29,7 +30,7 @@ import org.apache.commons.math3.exception.MathIllegalStateException;
  * geometrically (within the cap on each step) up to the search cap; no sign change below the cap means no fixed point there: runaway. Every search has an evaluation budget
  * and ends with a typed outcome.
  *
- * <p>Stateless and thread-safe: each call builds its own bracketing solver.
+ * <p>Stateless and thread-safe.
  */
 public final class LowestFixedPoint {
 
@@ -58,7 +59,8 @@ public final class LowestFixedPoint {
     /**
      * As {@link #find(DoubleUnaryOperator, double, SolverSettings)}; without {@code loopGain} the root's loop gain
      * is not computed (reported as 0) and its two extra evaluations are saved, for maps that are costly to
-     * evaluate and whose gain nobody reads (the board's air balance).
+     * evaluate and whose gain nobody reads (the board's air balance). A root returned was the last point evaluated
+     * without the gain, the third from last with it (before {@code x ± 1e-4}).
      */
     public static FixedPointOutcome find(DoubleUnaryOperator map, double x0, SolverSettings settings,
                                          boolean loopGain) {
@@ -83,7 +85,7 @@ public final class LowestFixedPoint {
                 return root(map, xb, gb, evals, loopGain);
             }
             if (gb > 0) {
-                return brent(map, xa, xb, evals, settings, loopGain);
+                return pegasus(map, xa, ga, xb, gb, evals, settings, loopGain);
             }
             if (xb >= cap) {
                 return new FixedPointOutcome.Runaway(xb, evals);
@@ -116,24 +118,52 @@ public final class LowestFixedPoint {
         return f < Double.POSITIVE_INFINITY ? f : Double.POSITIVE_INFINITY;
     }
 
-    private static FixedPointOutcome brent(DoubleUnaryOperator map, double lo, double hi, int evalsSoFar,
-                                           SolverSettings settings, boolean loopGain) {
-        // Stops when |g| ≤ a tenth of the tolerance (the residual the balance is held to) or the bracket has shrunk
-        // to 1 % of it (relative 1e-15, a few ulps at 300 K-scale values), whichever comes first.
-        PegasusSolver solver = new PegasusSolver(1e-15, 0.01 * settings.toleranceK(), 0.1 * settings.toleranceK());
-        int left = settings.maxEvaluations() - evalsSoFar;
-        try {
-            double x = solver.solve(left, t -> t - map.applyAsDouble(t), lo, hi, AllowedSolution.ANY_SIDE);
-            int evals = evalsSoFar + solver.getEvaluations();
+    /**
+     * The Pegasus iteration on the bracket {@code [lo, hi]} of {@code g(x) = x − F(x)}, with {@code g(lo) < 0 < g(hi)}
+     * already known. Stops when {@code |g|} is at most a tenth of the tolerance (the residual the balance is held
+     * to) or the bracket has shrunk to 1 % of it or to a relative 1e-15 (a few ulps at 300 K-scale values),
+     * whichever comes first; the root returned is always the last point evaluated.
+     */
+    static FixedPointOutcome pegasus(DoubleUnaryOperator map, double lo, double gLo, double hi, double gHi,
+                                     int evalsSoFar, SolverSettings settings, boolean loopGain) {
+        final double residualTol = 0.1 * settings.toleranceK();
+        final double absoluteTol = 0.01 * settings.toleranceK();
+        final double relativeTol = 1e-15;
+        double x0 = lo;
+        double g0 = gLo;
+        double x1 = hi;
+        double g1 = gHi;
+        int evals = evalsSoFar;
+        while (evals < settings.maxEvaluations()) {
+            double x = x1 - g1 * (x1 - x0) / (g1 - g0);
             double g = x - map.applyAsDouble(x);
-            if (!(Math.abs(g) <= ACCEPTED_RESIDUAL)) {
-                // A sign change without a zero: F jumps across the diagonal. No operating point to stand behind.
-                return new FixedPointOutcome.Exhausted(x, g, evals + 1);
+            evals++;
+            if (g == 0.0) {
+                return accepted(map, x, g, evals, loopGain);
             }
-            return root(map, x, g, evals + 1, loopGain);
-        } catch (MathIllegalStateException e) {
-            return new FixedPointOutcome.Exhausted(hi, hi - map.applyAsDouble(hi), settings.maxEvaluations());
+            if (g1 * g < 0) {
+                x0 = x1;
+                g0 = g1;
+            } else {
+                // Pegasus: scale the retained end's value so that the next secant moves it (Dowell and Jarratt).
+                g0 *= g1 / (g1 + g);
+            }
+            x1 = x;
+            g1 = g;
+            if (Math.abs(g1) <= residualTol || Math.abs(x1 - x0) < Math.max(relativeTol * Math.abs(x1), absoluteTol)) {
+                return accepted(map, x1, g1, evals, loopGain);
+            }
         }
+        return new FixedPointOutcome.Exhausted(x1, g1, evals);
+    }
+
+    private static FixedPointOutcome accepted(DoubleUnaryOperator map, double x, double g, int evals,
+                                              boolean loopGain) {
+        if (!(Math.abs(g) <= ACCEPTED_RESIDUAL)) {
+            // A sign change without a zero: F jumps across the diagonal. No operating point to stand behind.
+            return new FixedPointOutcome.Exhausted(x, g, evals);
+        }
+        return root(map, x, g, evals, loopGain);
     }
 
     private static FixedPointOutcome root(DoubleUnaryOperator map, double x, double g, int evals,
@@ -141,9 +171,9 @@ public final class LowestFixedPoint {
         if (!loopGain) {
             return new FixedPointOutcome.Root(x, g, 0.0, evals);
         }
+        // The root itself was evaluated just before these two: a caller that keeps the state of its last three
+        // evaluations still holds the root's (ElectroThermalSolver does).
         double gain = (map.applyAsDouble(x + GAIN_STEP) - map.applyAsDouble(x - GAIN_STEP)) / (2 * GAIN_STEP);
-        // Evaluate the root last, so a caller that remembers the last evaluation holds the root's own state.
-        map.applyAsDouble(x);
-        return new FixedPointOutcome.Root(x, g, gain, evals + 3);
+        return new FixedPointOutcome.Root(x, g, gain, evals + 2);
     }
 }

@@ -1,11 +1,10 @@
 package org.tjmargin.solve;
 
-import java.util.EnumMap;
 import java.util.List;
-import java.util.Map;
 import org.tjmargin.circuit.ShuntRegulatorSpec;
 import org.tjmargin.circuit.StandoffClamp;
 import org.tjmargin.derating.Measure;
+import org.tjmargin.derating.MeasureValues;
 import org.tjmargin.derating.RuleContext;
 import org.tjmargin.surge.SurgeResult;
 
@@ -33,7 +32,7 @@ final class Measurements {
      */
     static RuleContext of(PositionSpec spec, PositionInstance inst, OperatingPoint p, double allowedW,
                           double resistorAllowedW, List<SurgeResult> surges) {
-        Map<Measure, Double> v = new EnumMap<>(Measure.class);
+        MeasureValues.Builder v = MeasureValues.builder();
         v.put(Measure.JUNCTION_TEMPERATURE, p.tjK());
         v.put(Measure.POWER_RATIO, ratio(p.diodePowerW(), allowedW));
         double iz = p.circuit().diodeCurrentA();
@@ -48,16 +47,18 @@ final class Measurements {
             v.put(Measure.STANDOFF_RATIO, c.lineV() / spec.part().standoffV());
         }
         for (SurgeResult s : surges) {
-            v.merge(Measure.SURGE_JUNCTION_TEMPERATURE, s.peakJunctionTemperatureK(), Math::max);
-            v.merge(Measure.SURGE_POWER_RATIO, s.powerRatio(), Math::max);
-            s.clampVoltageRatio().ifPresent(r -> v.merge(Measure.CLAMP_VOLTAGE_RATIO, r, Math::max));
+            v.max(Measure.SURGE_JUNCTION_TEMPERATURE, s.peakJunctionTemperatureK());
+            v.max(Measure.SURGE_POWER_RATIO, s.powerRatio());
+            if (s.clampVoltageRatio().isPresent()) {
+                v.max(Measure.CLAMP_VOLTAGE_RATIO, s.clampVoltageRatio().getAsDouble());
+            }
         }
-        return new RuleContext(v, spec.part().ratings().tjMaxK(), p.referenceK(), p.tLocalK());
+        return new RuleContext(v.build(), spec.part().ratings().tjMaxK(), p.referenceK(), p.tLocalK());
     }
 
     /** What rules see of a corner without an operating point: the junction at the last temperature reached. */
     static RuleContext unresolved(PositionSpec spec, double tjK, double tLocalK) {
-        return new RuleContext(Map.of(Measure.JUNCTION_TEMPERATURE, tjK), spec.part().ratings().tjMaxK(), tjK,
+        return new RuleContext(MeasureValues.builder().put(Measure.JUNCTION_TEMPERATURE, tjK).build(), spec.part().ratings().tjMaxK(), tjK,
                 tLocalK);
     }
 

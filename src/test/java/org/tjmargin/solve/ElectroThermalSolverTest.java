@@ -71,8 +71,8 @@ class ElectroThermalSolverTest {
                     .point();
             // Tolerance 1e-8 K: the solver's 1e-10 K tolerance plus the closed form's own rounding near 300 K.
             assertEquals(T25 + u, p.tjK(), 1e-8, "seed " + seed + " case " + n);
-            // Cost: one evaluation per capped upward step to the root, then a handful of secant/Brent steps and the
-            // three of the loop gain and the final point.
+            // Cost: one evaluation per capped upward step to the root, then a handful of secant/Pegasus steps and
+            // the two of the loop gain.
             int cap = (int) Math.ceil((p.tjK() - tl) / SolverSettings.DEFAULT.maxStepK()) + 14;
             assertTrue(p.evaluations() <= cap, "evaluations " + p.evaluations() + " > " + cap + ", seed " + seed
                     + " case " + n);
