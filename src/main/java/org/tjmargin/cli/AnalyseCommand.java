@@ -19,6 +19,7 @@ import org.tjmargin.report.ChartSet;
 import org.tjmargin.report.HtmlReport;
 import org.tjmargin.report.OutputFiles;
 import org.tjmargin.report.RenderedChart;
+import org.tjmargin.report.RenderingWarmUp;
 import org.tjmargin.report.ReportInputs;
 import org.tjmargin.report.ResultsJson;
 import org.tjmargin.report.StatisticsCsv;
@@ -87,6 +88,8 @@ public final class AnalyseCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        // Chart and report start-up on the second core while the first reads the files (changes no output).
+        RenderingWarmUp.startInBackground();
         PrintWriter err = spec.commandLine().getErr();
         PrintWriter stdout = spec.commandLine().getOut();
         LoadedDesign loaded;

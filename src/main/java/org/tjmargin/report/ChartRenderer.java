@@ -3,18 +3,14 @@ package org.tjmargin.report;
 import java.awt.Graphics2D;
 import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
-import java.io.ByteArrayOutputStream;
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import javax.imageio.ImageIO;
 import org.jfree.chart.JFreeChart;
 import org.jfree.svg.SVGGraphics2D;
 import org.jfree.svg.SVGUtils;
 import org.jfree.svg.ViewBox;
 
 /**
- * Draws a built chart twice: into an RGB image encoded as PNG, and through JFreeSVG into an SVG element of the same
- * size. Headless: needs no display (the build runs with {@code java.awt.headless=true}, and so should the command
+ * Draws a built chart twice: into an RGB image encoded as PNG ({@link PngEncoder}), and through JFreeSVG into an SVG
+ * element of the same size. Headless: needs no display (the build runs with {@code java.awt.headless=true}, and so should the command
  * line). Stateless and thread-safe as long as each chart is drawn by one thread.
  */
 final class ChartRenderer {
@@ -28,11 +24,6 @@ final class ChartRenderer {
      * @param baseName file name without extension; also the prefix of the SVG's internal ids, so that several SVG
      *                 charts inline in one HTML page never share a clip-path id
      */
-    static {
-        // Encode in memory only: ImageIO otherwise spools every stream through a temporary file.
-        ImageIO.setUseCache(false);
-    }
-
     static RenderedChart render(String baseName, ChartKind kind, JFreeChart chart, ChartSize size) {
         return new RenderedChart(baseName, kind, size, png(chart, size), svg(baseName, chart, size));
     }
@@ -46,16 +37,7 @@ final class ChartRenderer {
         } finally {
             g2.dispose();
         }
-        ByteArrayOutputStream out = new ByteArrayOutputStream(64 * 1024);
-        try {
-            if (!ImageIO.write(image, "png", out)) {
-                throw new IllegalStateException("no PNG writer in this Java runtime");
-            }
-        } catch (IOException e) {
-            // A ByteArrayOutputStream does not fail; an IOException here is a broken image writer.
-            throw new UncheckedIOException("PNG encoding failed", e);
-        }
-        return out.toByteArray();
+        return PngEncoder.encode(image);
     }
 
     private static String svg(String baseName, JFreeChart chart, ChartSize size) {

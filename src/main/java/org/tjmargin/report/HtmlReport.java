@@ -46,6 +46,11 @@ public final class HtmlReport {
     private HtmlReport() {
     }
 
+    /** Compiles the template now rather than at the first report (see {@link RenderingWarmUp}). */
+    static void compileTemplate() {
+        Objects.requireNonNull(Template.PAGE);
+    }
+
     /** Compiled once, on first use (initialisation-on-demand holder). */
     private static final class Template {
         static final Mustache PAGE = new DefaultMustacheFactory(TEMPLATE_ROOT).compile(TEMPLATE);
