@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.tjmargin.derating.Policy;
 import org.tjmargin.design.DesignLoader;
@@ -14,28 +15,33 @@ import org.tjmargin.design.LoadedDesign;
 import org.tjmargin.design.LoadedPolicy;
 import org.tjmargin.design.ProfileLoader;
 import org.tjmargin.report.Cautions;
-import org.tjmargin.report.OutputFiles;
 import org.tjmargin.report.ChartSet;
 import org.tjmargin.report.HtmlReport;
+import org.tjmargin.report.OutputFiles;
 import org.tjmargin.report.RenderedChart;
 import org.tjmargin.report.RenderingWarmUp;
 import org.tjmargin.report.ReportInputs;
 import org.tjmargin.report.ResultsJson;
+import org.tjmargin.report.StatisticsCsv;
 import org.tjmargin.report.SummaryTable;
 import org.tjmargin.report.SweepCsv;
 import org.tjmargin.solve.Analysis;
 import org.tjmargin.solve.AnalysisResult;
 import org.tjmargin.solve.SolverSettings;
-import picocli.CommandLine;
+import org.tjmargin.variation.statistical.StatisticalAnalysis;
+import org.tjmargin.variation.statistical.StatisticsPlan;
+import org.tjmargin.variation.statistical.StatisticsResult;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
+import picocli.CommandLine;
 
 /** {@code tjmargin analyse DESIGN}: analyses a design file and writes its results. */
 @Command(name = "analyse", aliases = "analyze", mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         description = {"Analyses a design file (YAML or JSON, by extension): every position at every worst-case corner "
-            + "over the design's ambient range, held against the policy.",
+            + "over the design's ambient range, held against the policy; with statistics (a 'statistics' block in the "
+            + "design, or --samples) also Monte Carlo, root-sum-square spread, sensitivity ranking and yield.",
             "Prints a summary table and writes results.json, sweep.csv, report.html and the charts into the output "
                 + "folder."})
 public final class AnalyseCommand implements Callable<Integer> {
@@ -59,6 +65,23 @@ public final class AnalyseCommand implements Callable<Integer> {
                 "Default: the design's choice, else " + DEFAULT_POLICY + ". The built-in minimum (Tj below Tj max, "
                     + "Zener current at or above Izk) always applies as well."})
     String policyOption;
+
+    @Option(names = "--samples", paramLabel = "N",
+            description = {"run the statistics with N Monte Carlo samples per run, whether or not the design has a "
+                + "'statistics' block (default: the design's, else " + StatisticsPlan.DEFAULT_SAMPLES + ")."})
+    Long samples;
+
+    @Option(names = "--seed", paramLabel = "S",
+            description = "seed of the statistics' random streams, overriding the design's (same seed, same "
+                + "results, whatever the number of cores)")
+    Long seed;
+
+    @Option(names = "--no-statistics", description = "skip the statistics even where the design asks for them")
+    boolean noStatistics;
+
+    @Option(names = {"-q", "--quiet"}, description = "no progress bar (it is shown only on an interactive console "
+        + "and only for runs longer than about a second)")
+    boolean quiet;
 
     /** The profile applied when neither the command line nor the design names one. */
     static final String DEFAULT_POLICY = "general-commercial";
@@ -86,26 +109,51 @@ public final class AnalyseCommand implements Callable<Integer> {
         } catch (InputException e) {
             return invalid(err, e);
         }
-        Policy policy = loadedPolicy.policy().withBuiltInMinimum();
-        AnalysisResult result = Analysis.run(loaded.board(), policy, SolverSettings.DEFAULT);
-        List<String> cautions = Cautions.forResult(result);
-        List<InputFile> allInputs = new java.util.ArrayList<>(loaded.inputs());
-        allInputs.addAll(loadedPolicy.inputs());
-        ReportInputs provenance = new ReportInputs(VersionProvider.version(), cautions, allInputs.stream()
-                .map(f -> new ReportInputs.InputDigest(f.path().toString(), f.sha256())).toList());
-        String resultsJson = ResultsJson.render(result, provenance);
-        List<RenderedChart> charts = ChartSet.render(result);
-        OutputFiles files = new OutputFiles()
-                .text("results.json", resultsJson)
-                .text("sweep.csv", SweepCsv.render(result))
-                .text("report.html", HtmlReport.render(result, provenance, charts));
-        for (RenderedChart c : charts) {
-            files.bytes(c.pngFileName(), c.png()).text(c.svgFileName(), c.svg());
+        if (samples != null && (samples < 1 || samples > 1_000_000_000L)) {
+            err.println("--samples: expected a whole number from 1 to 1000000000, got " + samples + "; nothing written");
+            return ExitCodes.INVALID_INPUT;
         }
-        try {
+        Policy policy = loadedPolicy.policy().withBuiltInMinimum();
+        AnalysisResult result;
+        Optional<StatisticsResult> stats = Optional.empty();
+        boolean runStatistics = !noStatistics && (loaded.statistics().isPresent() || samples != null);
+        List<String> cautions;
+        String resultsJson;
+        List<RenderedChart> charts;
+        // The bar stays up until every file is written and is cleared before the table is printed.
+        try (ProgressBar progress = ProgressBar.start(err, !quiet && System.console() != null)) {
+            progress.phase("corner analysis");
+            result = Analysis.run(loaded.board(), policy, SolverSettings.DEFAULT);
+            if (runStatistics) {
+                progress.phase("statistics");
+                StatisticsPlan plan = loaded.statisticsWith(Optional.ofNullable(samples), Optional.ofNullable(seed));
+                stats = Optional.of(StatisticalAnalysis.run(result, plan, SolverSettings.DEFAULT, progress));
+            }
+            progress.phase("charts and report");
+            cautions = Cautions.forResult(result);
+            List<InputFile> allInputs = new java.util.ArrayList<>(loaded.inputs());
+            allInputs.addAll(loadedPolicy.inputs());
+            ReportInputs provenance = new ReportInputs(VersionProvider.version(), cautions, allInputs.stream()
+                    .map(f -> new ReportInputs.InputDigest(f.path().toString(), f.sha256())).toList());
+            resultsJson = ResultsJson.render(result, stats, provenance);
+            charts = ChartSet.render(result, stats);
+            OutputFiles files = new OutputFiles()
+                    .text("results.json", resultsJson)
+                    .text("sweep.csv", SweepCsv.render(result))
+                    .text("report.html", HtmlReport.render(result, stats, provenance, charts));
+            if (stats.isPresent()) {
+                files.text("spread.csv", StatisticsCsv.spread(stats.get()))
+                        .text("yield.csv", StatisticsCsv.yield(stats.get()))
+                        .text("sensitivity.csv", StatisticsCsv.sensitivity(result, stats.get()));
+            }
+            for (RenderedChart c : charts) {
+                files.bytes(c.pngFileName(), c.png()).text(c.svgFileName(), c.svg());
+            }
+            progress.phase("writing");
             List<Path> inputs = allInputs.stream().map(InputFile::path).toList();
             Path clash = files.wouldOverwrite(out, inputs);
             if (clash != null) {
+                progress.close();
                 err.println(out + ": the output folder would overwrite the input file " + clash
                         + "; choose another --out; nothing written");
                 return ExitCodes.INVALID_INPUT;
@@ -118,9 +166,10 @@ public final class AnalyseCommand implements Callable<Integer> {
         if (json) {
             stdout.print(resultsJson);
         } else {
-            stdout.print(SummaryTable.render(result, cautions));
-            stdout.println("written into " + out + ": results.json, sweep.csv, report.html and " + charts.size()
-                    + " charts (PNG and SVG)");
+            stdout.print(SummaryTable.render(result, stats, cautions));
+            stdout.println("written into " + out + ": results.json, sweep.csv, "
+                    + (stats.isPresent() ? "spread.csv, yield.csv, sensitivity.csv, " : "") + "report.html and "
+                    + charts.size() + " charts (PNG and SVG)");
         }
         stdout.flush();
         return ExitCodes.of(result.verdict());

@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.tjmargin.solve.Board;
+import org.tjmargin.variation.statistical.StatisticsPlan;
 
 /**
  * Loads a design file and the parts library it names, validates both and maps them into the domain.
@@ -53,12 +54,15 @@ public final class DesignLoader {
             }
         }
         Optional<String> policy = f.text("policy", Need.OPTIONAL);
-        Optional<Board> board = DesignReader.read(f, new PartReferences(library));
+        Optional<DesignReader.Mapped> mapped = DesignReader.read(f, new PartReferences(library));
         problems.throwIfAny();
-        Board b = board.orElseThrow(() -> new IllegalStateException("the design did not map, yet no problem was"
-                + " reported"));
+        DesignReader.Mapped m = mapped.orElseThrow(() -> new IllegalStateException("the design did not map, yet no"
+                + " problem was reported"));
         inputs.addAll(problems.furtherInputs());
-        return new LoadedDesign(b, policy, inputs, b.name());
+        Board b = m.board();
+        Optional<StatisticsPlan> plan = m.statistics().map(h -> new StatisticsPlan(h.settings(), h.yieldPoints(),
+                h.surgeSamples(), m.distributions()));
+        return new LoadedDesign(b, policy, inputs, b.name(), plan, m.distributions());
     }
 
     /**

@@ -1,14 +1,18 @@
 package org.tjmargin.design;
 
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import org.tjmargin.solve.AmbientRange;
 import org.tjmargin.solve.Board;
 import org.tjmargin.solve.PositionSpec;
 import org.tjmargin.thermal.Enclosure;
+import org.tjmargin.variation.Distribution;
+import org.tjmargin.variation.VariationModel;
 
 /**
  * Maps the top level of a design file, once its parts library has been read, into a {@link Board}.
@@ -16,9 +20,21 @@ import org.tjmargin.thermal.Enclosure;
 final class DesignReader {
 
     /** Keys of a design file's top level. */
-    static final Set<String> KEYS = Set.of("design", "parts", "policy", "ambient", "enclosure", "positions");
+    static final Set<String> KEYS = Set.of("design", "parts", "policy", "ambient", "enclosure", "positions",
+            "statistics");
 
     private DesignReader() {
+    }
+
+    /**
+     * The design mapped: its board, the statistics block if any, and each position's distributions.
+     *
+     * @param board         the board
+     * @param statistics    the {@code statistics} block's budget and default, when the design has one
+     * @param distributions each position's distributions (the design's default where a position names none)
+     */
+    record Mapped(Board board, Optional<StatisticsReader.Header> statistics,
+                  Map<String, VariationModel> distributions) {
     }
 
     /**
@@ -26,20 +42,27 @@ final class DesignReader {
      *
      * @param top  the design file's top-level object
      * @param refs the parts library's references
-     * @return the board, or empty when any problem was reported
+     * @return the mapped design, or empty when any problem was reported
      */
-    static Optional<Board> read(Fields top, PartReferences refs) {
+    static Optional<Mapped> read(Fields top, PartReferences refs) {
         Optional<String> name = top.text("design", Need.REQUIRED);
         Optional<AmbientRange> ambient = AmbientReader.ambient(top);
         Optional<Enclosure> enclosure = AmbientReader.enclosure(top);
-        Optional<List<PositionSpec>> positions = positions(top, refs);
-        if (!Fields.present(name, ambient, enclosure, positions)) {
+        Optional<StatisticsReader.Header> stats = StatisticsReader.header(top);
+        boolean statsOk = !top.has("statistics") || stats.isPresent();
+        Distribution byDefault = stats.map(StatisticsReader.Header::defaultDistribution)
+                .orElse(Distribution.UNIFORM);
+        Map<String, VariationModel> models = new LinkedHashMap<>();
+        Optional<List<PositionSpec>> positions = positions(top, refs, byDefault, models);
+        if (!Fields.present(name, ambient, enclosure, positions) || !statsOk) {
             return Optional.empty();
         }
-        return top.build(() -> new Board(name.get(), positions.get(), enclosure.get(), ambient.get()));
+        return top.build(() -> new Board(name.get(), positions.get(), enclosure.get(), ambient.get()))
+                .map(b -> new Mapped(b, stats, models));
     }
 
-    private static Optional<List<PositionSpec>> positions(Fields top, PartReferences refs) {
+    private static Optional<List<PositionSpec>> positions(Fields top, PartReferences refs, Distribution byDefault,
+                                                          Map<String, VariationModel> models) {
         Optional<Node.Sequence> seq = top.list("positions", Need.REQUIRED);
         if (seq.isEmpty()) {
             return Optional.empty();
@@ -63,8 +86,11 @@ final class DesignReader {
                 ok = false;
             }
             Optional<PositionSpec> p = PositionReader.read(top.ctx(), item, path, refs);
-            if (p.isPresent()) {
+            Optional<VariationModel> model = p.flatMap(spec -> StatisticsReader.model(top.ctx(), item, path, spec,
+                    byDefault));
+            if (p.isPresent() && model.isPresent()) {
                 out.add(p.get());
+                models.put(p.get().id(), model.get());
             } else {
                 ok = false;
             }

@@ -43,6 +43,11 @@ final class Fields {
         return Optional.of(new Fields(ctx, m, path));
     }
 
+    /** A view of an object whose keys were already checked (by an earlier {@link #of}), or empty. */
+    static Optional<Fields> checked(FileContext ctx, Node node, String path) {
+        return node instanceof Node.Mapping m ? Optional.of(new Fields(ctx, m, path)) : Optional.empty();
+    }
+
     private static List<String> sorted(Set<String> keys) {
         List<String> l = new ArrayList<>(keys);
         l.sort(null);

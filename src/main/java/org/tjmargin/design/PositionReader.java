@@ -24,7 +24,8 @@ import org.tjmargin.variation.Range;
  */
 final class PositionReader {
 
-    private static final Set<String> KEYS = Set.of("id", "part", "mounting", "circuit", "tolerances", "surges");
+    private static final Set<String> KEYS = Set.of("id", "part", "mounting", "circuit", "tolerances", "surges",
+            "distributions");
     private static final Set<String> TOLERANCE_KEYS = Set.of("thermal-resistance", "vz", "temperature-coefficient");
 
     private PositionReader() {

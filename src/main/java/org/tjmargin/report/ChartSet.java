@@ -3,15 +3,19 @@ package org.tjmargin.report;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
 import org.jfree.chart.JFreeChart;
 import org.tjmargin.solve.AnalysisResult;
 import org.tjmargin.solve.PositionSpec;
+import org.tjmargin.variation.statistical.PositionStatistics;
+import org.tjmargin.variation.statistical.StatisticsResult;
 
 /**
  * Every chart of an analysis, drawn as PNG and SVG, in board order and per position in the order of
  * {@link ChartKind}: {@code <position>-margin}, {@code -operating}, {@code -rating} and, for shunt regulators,
- * {@code -resistor}, and for positions with surges {@code -surge} and {@code -surge-margin} (names from
- * {@link ChartNames}). Nothing is written to disk here.
+ * {@code -resistor}, for positions with surges {@code -surge} and {@code -surge-margin}, and, when a statistical
+ * analysis is given and covers the position, {@code -tj-histogram}, {@code -margin-histogram}, {@code -tornado} and
+ * {@code -yield} (names from {@link ChartNames}). Nothing is written to disk here.
  *
  * <p>The charts read the analysis only; none recomputes a physical quantity. Headless: set
  * {@code java.awt.headless=true} in a process without a display. Stateless and thread-safe.
@@ -28,14 +32,26 @@ public final class ChartSet {
 
     /** All charts of the analysis at {@code size}. */
     public static List<RenderedChart> render(AnalysisResult result, ChartSize size) {
+        return render(result, Optional.empty(), size);
+    }
+
+    /** All charts of the analysis and of its statistics, when given, at {@link ChartSize#DEFAULT}. */
+    public static List<RenderedChart> render(AnalysisResult result, Optional<StatisticsResult> stats) {
+        return render(result, stats, ChartSize.DEFAULT);
+    }
+
+    /** All charts of the analysis and of its statistics, when given, at {@code size}. */
+    public static List<RenderedChart> render(AnalysisResult result, Optional<StatisticsResult> stats,
+                                             ChartSize size) {
         Objects.requireNonNull(result, "result");
+        Objects.requireNonNull(stats, "stats");
         Objects.requireNonNull(size, "size");
         List<String> stems = ChartNames.stems(result);
         record Task(int position, ChartKind kind) {
         }
         List<Task> tasks = new ArrayList<>();
         for (int i = 0; i < result.positions().size(); i++) {
-            for (ChartKind kind : kindsFor(result, i)) {
+            for (ChartKind kind : kindsFor(result, stats, i)) {
                 tasks.add(new Task(i, kind));
             }
         }
@@ -43,7 +59,7 @@ public final class ChartSet {
         // cores; the ordered stream keeps the list in position/kind order.
         return tasks.parallelStream()
                 .map(t -> ChartRenderer.render(ChartNames.baseName(stems.get(t.position()), t.kind()), t.kind(),
-                        build(result, t.position(), t.kind()), size))
+                        build(result, stats, t.position(), t.kind()), size))
                 .toList();
     }
 
@@ -62,11 +78,39 @@ public final class ChartSet {
     }
 
     /**
+     * The charts a position gets with statistics: those of {@link #kindsFor(AnalysisResult, int)}, then
+     * {@link ChartKind#STATISTICAL} when {@code stats} covers the position.
+     */
+    public static List<ChartKind> kindsFor(AnalysisResult result, Optional<StatisticsResult> stats,
+                                           int positionIndex) {
+        List<ChartKind> kinds = kindsFor(result, positionIndex);
+        if (statisticsOf(result, stats, positionIndex).isEmpty()) {
+            return kinds;
+        }
+        List<ChartKind> all = new ArrayList<>(kinds);
+        all.addAll(ChartKind.STATISTICAL);
+        return List.copyOf(all);
+    }
+
+    /**
      * One chart as a JFreeChart object, styled but not drawn (for a caller that draws it elsewhere).
      *
-     * @throws IllegalArgumentException for {@link ChartKind#RESISTOR} at a position without a series resistor
+     * @throws IllegalArgumentException for {@link ChartKind#RESISTOR} at a position without a series resistor, and
+     *                                  for a statistical kind (use {@link #build(AnalysisResult, Optional, int,
+     *                                  ChartKind)})
      */
     public static JFreeChart build(AnalysisResult result, int positionIndex, ChartKind kind) {
+        return build(result, Optional.empty(), positionIndex, kind);
+    }
+
+    /**
+     * One chart, of the analysis or of its statistics, styled but not drawn.
+     *
+     * @throws IllegalArgumentException for {@link ChartKind#RESISTOR} at a position without a series resistor, and
+     *                                  for a statistical kind when {@code stats} does not cover the position
+     */
+    public static JFreeChart build(AnalysisResult result, Optional<StatisticsResult> stats, int positionIndex,
+                                   ChartKind kind) {
         return switch (kind) {
             case MARGIN -> ChartMargin.build(result, positionIndex);
             case SURGE -> ChartSurge.build(result, positionIndex);
@@ -74,6 +118,25 @@ public final class ChartSet {
             case OPERATING -> ChartOperatingPoint.build(result, positionIndex);
             case RATING -> ChartDeviceRating.build(result, positionIndex);
             case RESISTOR -> ChartResistorRating.build(result, positionIndex);
+            case TJ_HISTOGRAM -> ChartHistogram.buildTj(result, positionIndex, required(result, stats, positionIndex,
+                    kind));
+            case MARGIN_HISTOGRAM -> ChartHistogram.buildMargin(result, positionIndex, required(result, stats,
+                    positionIndex, kind));
+            case TORNADO -> ChartTornado.build(result, positionIndex, required(result, stats, positionIndex, kind));
+            case YIELD -> ChartYield.build(result, positionIndex, required(result, stats, positionIndex, kind));
         };
+    }
+
+    private static PositionStatistics required(AnalysisResult result, Optional<StatisticsResult> stats,
+                                               int positionIndex, ChartKind kind) {
+        return statisticsOf(result, stats, positionIndex).orElseThrow(() -> new IllegalArgumentException("chart "
+                + kind.suffix() + " needs the statistics of position " + result.positions().get(positionIndex).id()));
+    }
+
+    /** The statistics of a position, when {@code stats} covers it. */
+    static Optional<PositionStatistics> statisticsOf(AnalysisResult result, Optional<StatisticsResult> stats,
+                                                     int positionIndex) {
+        String id = result.positions().get(positionIndex).id();
+        return stats.flatMap(s -> s.of(id));
     }
 }

@@ -4,9 +4,11 @@ import java.awt.Font;
 import java.awt.RenderingHints;
 import java.util.List;
 import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.CategoryAxis;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
+import org.jfree.chart.plot.CategoryPlot;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.title.LegendTitle;
 import org.jfree.chart.title.TextTitle;
@@ -65,6 +67,28 @@ final class ChartStyle {
         plot.setAxisOffset(new RectangleInsets(4, 4, 4, 4));
         for (int i = 0; i < plot.getDomainAxisCount(); i++) {
             axis(plot.getDomainAxis(i));
+        }
+        for (int i = 0; i < plot.getRangeAxisCount(); i++) {
+            axis(plot.getRangeAxis(i));
+        }
+    }
+
+    /** The same look for a category plot (the tornado's rows): grid along the values only. */
+    static void plot(CategoryPlot plot) {
+        plot.setBackgroundPaint(Palette.SHEET);
+        plot.setOutlinePaint(Palette.RULE);
+        plot.setRangeGridlinePaint(Palette.GRID);
+        plot.setRangeGridlinesVisible(true);
+        plot.setDomainGridlinesVisible(false);
+        plot.setAxisOffset(new RectangleInsets(4, 4, 4, 4));
+        CategoryAxis rows = plot.getDomainAxis();
+        if (rows != null) {
+            rows.setLabelFont(AXIS_LABEL);
+            rows.setLabelPaint(Palette.INK);
+            rows.setTickLabelFont(TICK);
+            rows.setTickLabelPaint(Palette.INK);
+            rows.setAxisLinePaint(Palette.INK_SOFT);
+            rows.setTickMarkPaint(Palette.INK_SOFT);
         }
         for (int i = 0; i < plot.getRangeAxisCount(); i++) {
             axis(plot.getRangeAxis(i));

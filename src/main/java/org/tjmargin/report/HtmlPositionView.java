@@ -53,6 +53,11 @@ final class HtmlPositionView {
     private final PositionAtAmbient atMax;
     private final String anchor;
 
+    /** The anchor of the position's section, {@code pos-<stem>}. */
+    String anchor() {
+        return anchor;
+    }
+
     HtmlPositionView(AnalysisResult result, int index, String stem) {
         this.result = result;
         this.spec = result.board().positions().get(index);
@@ -79,6 +84,11 @@ final class HtmlPositionView {
     }
 
     HtmlView.Position section(List<HtmlView.Chart> charts) {
+        return section(charts, null);
+    }
+
+    /** The section with its statistical spread, {@code null} for none. */
+    HtmlView.Position section(List<HtmlView.Chart> charts, HtmlView.Statistics statistics) {
         String summary = "Verdict " + pr.verdict() + "; smallest margin " + HtmlFormat.margin(pr.worstMargin())
                 + " (rule " + pr.limitingRuleId() + ") at " + HtmlFormat.temperature(pr.worstAmbientK())
                 + " ambient; maximum ambient " + maxAmbient(pr.maxAmbient()) + ".";
@@ -94,7 +104,7 @@ final class HtmlPositionView {
                         + pr.limitingRuleId() + ") at " + HtmlFormat.temperature(pr.worstAmbientK()) + " ambient.",
                 pr.regulation().map(r -> new HtmlView.Facts(regulationFacts(r))).orElse(null),
                 pr.runaway().map(o -> new HtmlView.Text(runawayText(o))).orElse(null), charts,
-                HtmlSurgeView.of(result, spec, atMax).orElse(null));
+                HtmlSurgeView.of(result, spec, atMax).orElse(null), statistics);
     }
 
     /** The worst margin; a runaway position's comes from the search cap, and says so. */

@@ -10,6 +10,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Optional;
 import java.util.regex.Pattern;
 import org.tjmargin.derating.Bound;
 import org.tjmargin.derating.Rule;
@@ -18,13 +19,15 @@ import org.tjmargin.solve.BoardAtAmbient;
 import org.tjmargin.solve.Verdict;
 import org.tjmargin.thermal.Enclosure;
 import org.tjmargin.units.Dimension;
+import org.tjmargin.variation.statistical.PositionStatistics;
+import org.tjmargin.variation.statistical.StatisticsResult;
 
 /**
  * The review report: one self-contained HTML page (inline CSS and inline SVG charts; no script, no external file, no
  * web font) that a design reviewer reads from top to bottom: the verdict, a table of every position, a section per
  * position (inputs, estimates, assumptions, operating points at every corner at the design's highest ambient, the
- * margin of every rule, regulation, runaway, charts), the policy, the safety cautions, and the provenance of the
- * inputs.
+ * margin of every rule, regulation, runaway, charts and, with statistics, the statistical spread), the policy, the
+ * safety cautions, and the provenance of the inputs.
  *
  * <p>Text comes from the Mustache templates in {@code src/main/resources/org/tjmargin/report/}; every value is
  * HTML-escaped by the template engine ({@code {{value}}}), except the SVG of the charts, which this tool drew itself
@@ -71,11 +74,23 @@ public final class HtmlReport {
 
     /** Renders the report; see {@link #render(AnalysisResult, List, List, String, List)}. */
     public static String render(AnalysisResult result, ReportInputs inputs, List<RenderedChart> charts) {
+        return render(result, Optional.empty(), inputs, charts);
+    }
+
+    /**
+     * Renders the report with its statistics, when given: a "Statistical spread" block in the section of every
+     * position they cover (the three methods side by side, per-rule probabilities, inputs, ranking and the
+     * statistics charts of {@link ChartSet#render(AnalysisResult, Optional)}), and a statistics line in the verdict
+     * area. Without statistics the page is the one of {@link #render(AnalysisResult, ReportInputs, List)}.
+     */
+    public static String render(AnalysisResult result, Optional<StatisticsResult> stats, ReportInputs inputs,
+                                List<RenderedChart> charts) {
         Objects.requireNonNull(result, "result");
+        Objects.requireNonNull(stats, "stats");
         Objects.requireNonNull(inputs, "inputs");
         StringWriter out = new StringWriter(256 * 1024);
         try {
-            Template.PAGE.execute(out, page(result, inputs, charts)).flush();
+            Template.PAGE.execute(out, page(result, stats, inputs, charts)).flush();
         } catch (IOException e) {
             // A StringWriter never fails; an IOException here comes from a broken template engine.
             throw new UncheckedIOException("rendering the HTML report failed", e);
@@ -84,6 +99,11 @@ public final class HtmlReport {
     }
 
     static HtmlView.Page page(AnalysisResult result, ReportInputs inputs, List<RenderedChart> charts) {
+        return page(result, Optional.empty(), inputs, charts);
+    }
+
+    static HtmlView.Page page(AnalysisResult result, Optional<StatisticsResult> stats, ReportInputs inputs,
+                              List<RenderedChart> charts) {
         Map<String, RenderedChart> byName = new HashMap<>();
         for (RenderedChart c : charts) {
             byName.put(c.baseName(), c);
@@ -91,6 +111,7 @@ public final class HtmlReport {
         List<String> stems = ChartNames.stems(result);
         List<HtmlView.SummaryRow> summary = new ArrayList<>();
         List<HtmlView.Position> positions = new ArrayList<>();
+        List<String> anchors = new ArrayList<>();
         for (int i = 0; i < result.positions().size(); i++) {
             HtmlPositionView v = new HtmlPositionView(result, i, stems.get(i));
             summary.add(v.summaryRow());
@@ -101,14 +122,33 @@ public final class HtmlReport {
                     inline.add(new HtmlView.Chart(kind.caption(), inlineSvg(c.svg()), c.svgFileName()));
                 }
             }
-            positions.add(v.section(inline));
+            anchors.add(v.anchor());
+            positions.add(v.section(inline, statistics(result, stats, i, v.anchor(), stems.get(i), byName)));
         }
         List<HtmlView.Input> files = inputs.inputs().stream()
                 .map(d -> new HtmlView.Input(d.path(), d.sha256())).toList();
         String designMax = HtmlFormat.temperature(result.atMaximumAmbient().ambientK());
         return new HtmlView.Page(result.board().name(), inputs.toolVersion(),
                 HtmlPositionView.badge(result.verdict()), verdictText(result), designFacts(result), summary,
-                designMax, positions, policy(result), inputs.cautions(), files, colours());
+                designMax, positions, policy(result), inputs.cautions(), files, colours(),
+                stats.flatMap(st -> HtmlStatisticsView.summary(result, st, anchors)).orElse(null));
+    }
+
+    /** A position's statistical spread with its charts, or {@code null} when {@code stats} does not cover it. */
+    private static HtmlView.Statistics statistics(AnalysisResult result, Optional<StatisticsResult> stats, int index,
+                                                  String anchor, String stem, Map<String, RenderedChart> byName) {
+        Optional<PositionStatistics> ps = ChartSet.statisticsOf(result, stats, index);
+        if (ps.isEmpty()) {
+            return null;
+        }
+        List<HtmlView.Chart> inline = new ArrayList<>();
+        for (ChartKind kind : ChartKind.STATISTICAL) {
+            RenderedChart c = byName.get(ChartNames.baseName(stem, kind));
+            if (c != null) {
+                inline.add(new HtmlView.Chart(kind.caption(), inlineSvg(c.svg()), c.svgFileName()));
+            }
+        }
+        return HtmlStatisticsView.of(result, index, ps.get(), anchor, inline);
     }
 
     /** The SVG for inline use: without its namespace declarations, which HTML does not need. */

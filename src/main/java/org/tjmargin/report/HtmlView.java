@@ -7,7 +7,9 @@ import java.util.List;
  * escape. Nothing here is computed beyond choosing and formatting values of the results.
  *
  * <p>Each record's components are read by the template by name ({@code {{designName}}}); a {@code null} or an empty
- * list hides its section.
+ * list hides its section. A name the template looks up inside a section is searched outwards through the enclosing
+ * records, so an optional block's name is unique on the page ({@code spread}, {@code statisticsSummary},
+ * {@code surgeNote}): a {@code null} must never let an outer record's value of the same name show instead.
  */
 final class HtmlView {
 
@@ -17,7 +19,7 @@ final class HtmlView {
     /** The whole page. */
     record Page(String designName, String toolVersion, Badge verdict, String verdictText, List<Fact> design,
                 List<SummaryRow> summary, String summaryAmbient, List<Position> positions, Policy policy,
-                List<String> cautions, List<Input> inputs, List<Fact> colours) {
+                List<String> cautions, List<Input> inputs, List<Fact> colours, StatisticsSummary statisticsSummary) {
 
         /** True when there is a caution to print. */
         boolean hasCautions() {
@@ -43,7 +45,8 @@ final class HtmlView {
     record Position(String id, String anchor, Badge verdict, String summary, List<Fact> part, List<Fact> mounting,
                     List<Fact> circuit, List<String> estimates, List<String> assumptions, String cornersCaption,
                     List<CornerRow> corners, boolean hasResistor, String marginsCaption, List<MarginRow> margins,
-                    String worstOverRange, Facts regulation, Text runaway, List<Chart> charts, Surges surges) {
+                    String worstOverRange, Facts regulation, Text runaway, List<Chart> charts, Surges surges,
+                    Statistics spread) {
 
         /** True when there is a chart to place. */
         boolean hasCharts() {
@@ -60,6 +63,51 @@ final class HtmlView {
 
     /** One surge: its test and its result at its worst corner at the design's highest ambient. */
     record Surge(String id, String description, List<Fact> facts) {
+    }
+
+    /**
+     * The statistics line of the verdict area ({@code null} without statistics): one sentence naming the position
+     * most likely to violate the policy, and a line per position.
+     */
+    record StatisticsSummary(String text, List<StatisticsLine> lines) {
+    }
+
+    /** One position's line of the statistics summary, linking to its section. */
+    record StatisticsLine(String id, String anchor, String text) {
+    }
+
+    /**
+     * A position's statistical spread ({@code null} without statistics): the three methods side by side at the
+     * design's highest ambient, the Monte Carlo run, each rule's violating probability, the inputs with their
+     * distributions, the tornado ranking, the charts, and the notes on the air and on surges.
+     */
+    record Statistics(String anchor, String caption, List<MethodRow> methods, List<Fact> run,
+                      List<ViolationRow> rules, String rulesCaption, List<InputRow> sampledInputs,
+                      String tornadoCaption, List<TornadoRow> tornado, List<Chart> charts, String air,
+                      Text surgeNote) {
+
+        /** True when there is a chart to place. */
+        boolean hasCharts() {
+            return !charts.isEmpty();
+        }
+    }
+
+    /** One method of the comparison table. */
+    record MethodRow(String method, String description, String tj, String margin, String violation, String basis) {
+    }
+
+    /** One rule's probability of being violated in the Monte Carlo run. */
+    record ViolationRow(String ruleId, String title, String probability, String interval, String count,
+                        String cssClass) {
+    }
+
+    /** One sampled input. */
+    record InputRow(String input, String distribution, String range, String sigma) {
+    }
+
+    /** One bar of the tornado, in rank order. */
+    record TornadoRow(String rank, String input, String range, String atLow, String atHigh, String swing,
+                      String rssShare) {
     }
 
     /** A group of facts that may be absent as a whole ({@code null}). */

@@ -33,4 +33,34 @@ public final class Labels {
             case NONE -> "none";
         };
     }
+
+    /**
+     * The unit of an axis's values at a position (see {@link org.tjmargin.variation.AxisValues}): the supply is a
+     * current for a current-fed diode, the load a resistance where it is given as one; the thermal resistance is a
+     * factor on every resistance of the path.
+     */
+    public static String axisUnit(org.tjmargin.solve.PositionSpec spec, org.tjmargin.variation.Axis axis) {
+        return switch (axis) {
+            case SUPPLY -> spec.circuit() instanceof CurrentFedSpec ? "A" : "V";
+            case LOAD -> spec.circuit() instanceof ShuntRegulatorSpec s
+                    && s.load() instanceof org.tjmargin.circuit.LoadRange.Resistive ? "Ω" : "A";
+            case VZ -> "V";
+            case SERIES_RESISTOR -> "Ω";
+            case THERMAL_RESISTANCE -> "1";
+            case TEMPERATURE_COEFFICIENT -> "V/K";
+        };
+    }
+
+    /** What an axis is, in words, for tables: e.g. {@code supply voltage}, {@code Vz shift}. */
+    public static String axisName(org.tjmargin.solve.PositionSpec spec, org.tjmargin.variation.Axis axis) {
+        return switch (axis) {
+            case SUPPLY -> spec.circuit() instanceof CurrentFedSpec ? "feed current"
+                    : spec.circuit() instanceof ShuntRegulatorSpec ? "supply voltage" : "line voltage";
+            case LOAD -> "load";
+            case VZ -> "Vz shift";
+            case SERIES_RESISTOR -> "series resistor";
+            case THERMAL_RESISTANCE -> "thermal-resistance factor";
+            case TEMPERATURE_COEFFICIENT -> "temperature coefficient";
+        };
+    }
 }

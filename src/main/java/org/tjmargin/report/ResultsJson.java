@@ -26,6 +26,8 @@ import org.tjmargin.surge.PositionSurges;
 import org.tjmargin.surge.SurgeCase;
 import org.tjmargin.surge.SurgeRating;
 import org.tjmargin.surge.SurgeResult;
+import org.tjmargin.variation.statistical.PositionStatistics;
+import org.tjmargin.variation.statistical.StatisticsResult;
 
 /**
  * {@code results.json} (design section 4): per position the identifier, verdict, limiting rule, maximum ambient and,
@@ -48,10 +50,18 @@ public final class ResultsJson {
 
     /** Renders the whole result. */
     public static String render(AnalysisResult r, ReportInputs provenance) {
+        return render(r, Optional.empty(), provenance);
+    }
+
+    /**
+     * Renders the whole result with its statistics, when there are any: a top-level {@code statistics} object
+     * with the run's budget, and a {@code statistics} object in every position ({@code null} without).
+     */
+    public static String render(AnalysisResult r, Optional<StatisticsResult> stats, ReportInputs provenance) {
         StringWriter text = new StringWriter(1 << 20);
         try (JsonGenerator g = JSON.createGenerator(text)) {
             g.useDefaultPrettyPrinter();
-            write(g, tree(r, provenance));
+            write(g, tree(r, stats, provenance));
         } catch (IOException e) {
             // A StringWriter does not fail; an IOException here is a broken generator.
             throw new UncheckedIOException("results could not be rendered as JSON", e);
@@ -61,6 +71,11 @@ public final class ResultsJson {
 
     /** The whole result as a tree, before it is written. */
     static ObjectNode tree(AnalysisResult r, ReportInputs provenance) {
+        return tree(r, Optional.empty(), provenance);
+    }
+
+    /** The whole result with its statistics as a tree, before it is written. */
+    static ObjectNode tree(AnalysisResult r, Optional<StatisticsResult> stats, ReportInputs provenance) {
         ObjectNode root = NODES.objectNode();
         root.putObject("tool").put("name", "tjmargin").put("version", provenance.toolVersion());
         root.put("design", r.board().name());
@@ -78,9 +93,22 @@ public final class ResultsJson {
                     .put("bound", rule.bound().name()).put("limit", rule.limit().describe(rule.measure().isTemperature()))
                     .put("provenance", rule.provenance());
         }
+        if (stats.isPresent()) {
+            root.set("statistics", StatisticsJson.plan(NODES, stats.get().plan()));
+        } else {
+            root.putNull("statistics");
+        }
         ArrayNode positions = root.putArray("positions");
         for (int i = 0; i < r.positions().size(); i++) {
-            positions.add(position(r, i));
+            ObjectNode p = position(r, i);
+            PositionSpec spec = r.board().positions().get(i);
+            Optional<PositionStatistics> ps = stats.flatMap(st -> st.of(spec.id()));
+            if (ps.isPresent()) {
+                p.set("statistics", StatisticsJson.position(NODES, spec, ps.get()));
+            } else {
+                p.putNull("statistics");
+            }
+            positions.add(p);
         }
         ArrayNode inputs = root.putArray("inputs");
         for (ReportInputs.InputDigest d : provenance.inputs()) {

@@ -3,6 +3,7 @@ package org.tjmargin.report;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import org.tjmargin.solve.AnalysisResult;
 import org.tjmargin.solve.OperatingPoint;
 import org.tjmargin.solve.PositionAtAmbient;
@@ -10,6 +11,10 @@ import org.tjmargin.solve.PositionResult;
 import org.tjmargin.solve.PositionSpec;
 import org.tjmargin.units.Dimension;
 import org.tjmargin.units.Quantities;
+import org.tjmargin.variation.statistical.MonteCarloResult;
+import org.tjmargin.variation.statistical.PositionStatistics;
+import org.tjmargin.variation.statistical.RssOutcome;
+import org.tjmargin.variation.statistical.StatisticsResult;
 
 /**
  * The terminal summary: one row per position with its verdict, the hottest corner at the design's highest ambient
@@ -26,22 +31,87 @@ public final class SummaryTable {
 
     /** Renders the summary as plain text (UTF-8, fixed-width columns). */
     public static String render(AnalysisResult r, List<String> cautions) {
+        return render(r, Optional.empty(), cautions);
+    }
+
+    /** As above, with a statistics table after the corner table when there are statistics. */
+    public static String render(AnalysisResult r, Optional<StatisticsResult> stats, List<String> cautions) {
         List<String[]> rows = new ArrayList<>();
         rows.add(HEADER);
         for (int i = 0; i < r.positions().size(); i++) {
             rows.add(row(r, i));
-        }
-        int[] w = new int[HEADER.length];
-        for (String[] row : rows) {
-            for (int c = 0; c < row.length; c++) {
-                w[c] = Math.max(w[c], row[c].codePointCount(0, row[c].length()));
-            }
         }
         StringBuilder sb = new StringBuilder();
         sb.append(r.board().name()).append(" — policy: ").append(r.policy().name()).append(", ambient ")
                 .append(String.format(Locale.ROOT, "%.1f … %.1f °C", Labels.celsius(r.board().ambient().minK()),
                         Labels.celsius(r.board().ambient().maxK())))
                 .append(", design verdict ").append(r.verdict()).append('\n');
+        table(sb, rows);
+        sb.append("(Tj hot, P diode, Vout: hottest corner at the highest ambient; min Iz: least diode current over the "
+                + "sweep)\n");
+        stats.ifPresent(st -> statistics(sb, st));
+        for (PositionResult pr : r.positions()) {
+            for (String n : pr.notes()) {
+                sb.append("note ").append(pr.id()).append(": ").append(n).append('\n');
+            }
+            pr.runaway().ifPresent(o -> sb.append("note ").append(pr.id()).append(": thermal runaway begins ")
+                    .append(o.atOrBelowSearch() ? "at or below " : "at ")
+                    .append(String.format(Locale.ROOT, "%.1f °C ambient", Labels.celsius(o.ambientK()))).append('\n'));
+        }
+        for (String c : cautions) {
+            sb.append("CAUTION: ").append(c).append('\n');
+        }
+        return sb.toString();
+    }
+
+    private static final String[] STATS_HEADER = {"position", "P(violation), 95 % interval", "samples",
+        "Tj mean ± σ", "margin mean ± σ", "RSS: Tj ± σ", "corners: Tj", "strongest input"};
+
+    /** The statistics at the highest ambient, one row per position. */
+    private static void statistics(StringBuilder sb, StatisticsResult st) {
+        List<String[]> rows = new ArrayList<>();
+        rows.add(STATS_HEADER);
+        double ambient = Double.NaN;
+        for (PositionStatistics p : st.positions()) {
+            ambient = p.ambientK();
+            MonteCarloResult mc = p.monteCarlo();
+            var v = mc.violation();
+            String rss = p.rss() instanceof RssOutcome.Spread sp
+                    ? String.format(Locale.ROOT, "%.1f °C ± %.2g K", Labels.celsius(sp.nominalTjK()), sp.tjSigmaK())
+                    : "unresolved";
+            String corners = Double.isNaN(p.corners().tjMaxK()) ? "-" : String.format(Locale.ROOT,
+                    "%.1f … %.1f °C", Labels.celsius(p.corners().tjMinK()), Labels.celsius(p.corners().tjMaxK()));
+            String top = p.tornado().bars().isEmpty() ? "-" : p.tornado().bars().get(0).axis().label();
+            rows.add(new String[] {p.positionId(), String.format(Locale.ROOT, "%s [%s, %s]", percent(v.estimate()),
+                percent(v.lower()), percent(v.upper())),
+                mc.settings().samples() + (p.surgesIncluded() ? " (surges)" : ""),
+                mc.tj().count() == 0 ? "-" : String.format(Locale.ROOT, "%.1f °C ± %.2g K",
+                        Labels.celsius(mc.tj().mean()), mc.tj().standardDeviation()),
+                mc.margin().count() == 0 ? "-" : String.format(Locale.ROOT, "%.1f %% ± %.2g %%",
+                        100 * mc.margin().mean(), 100 * mc.margin().standardDeviation()),
+                rss, corners, top});
+        }
+        sb.append('\n').append(String.format(Locale.ROOT, "statistics at %.1f °C ambient (seed %d; yield curve "
+                + "and histograms in the report):", Labels.celsius(ambient), st.plan().settings().seed()))
+                .append('\n');
+        table(sb, rows);
+    }
+
+    private static String percent(double fraction) {
+        double pc = 100 * fraction;
+        if (pc == 0) {
+            return "0 %";
+        }
+        return String.format(Locale.ROOT, pc < 0.1 ? "%.2g %%" : "%.2f %%", pc);
+    }
+
+    private static void table(StringBuilder sb, List<String[]> rows) {
+        int[] w = new int[rows.get(0).length];
+        for (String[] row : rows) {
+            for (int c = 0; c < row.length; c++) {
+                w[c] = Math.max(w[c], row[c].codePointCount(0, row[c].length()));
+            }
+        }
         for (int k = 0; k < rows.size(); k++) {
             String[] row = rows.get(k);
             for (int c = 0; c < row.length; c++) {
@@ -55,20 +125,6 @@ public final class SummaryTable {
                 sb.append('\n');
             }
         }
-        sb.append("(Tj hot, P diode, Vout: hottest corner at the highest ambient; min Iz: least diode current over the "
-                + "sweep)\n");
-        for (PositionResult pr : r.positions()) {
-            for (String n : pr.notes()) {
-                sb.append("note ").append(pr.id()).append(": ").append(n).append('\n');
-            }
-            pr.runaway().ifPresent(o -> sb.append("note ").append(pr.id()).append(": thermal runaway begins ")
-                    .append(o.atOrBelowSearch() ? "at or below " : "at ")
-                    .append(String.format(Locale.ROOT, "%.1f °C ambient", Labels.celsius(o.ambientK()))).append('\n'));
-        }
-        for (String c : cautions) {
-            sb.append("CAUTION: ").append(c).append('\n');
-        }
-        return sb.toString();
     }
 
     private static String[] row(AnalysisResult r, int i) {

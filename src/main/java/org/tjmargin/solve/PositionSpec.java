@@ -10,6 +10,7 @@ import org.tjmargin.circuit.ShuntRegulatorSpec;
 import org.tjmargin.derating.RuleContext;
 import org.tjmargin.device.BreakdownPart;
 import org.tjmargin.surge.PositionSurges;
+import org.tjmargin.surge.SurgeResult;
 import org.tjmargin.thermal.SteadyThermalPath;
 import org.tjmargin.variation.Axis;
 import org.tjmargin.variation.AxisValues;
@@ -129,6 +130,23 @@ public record PositionSpec(String id, BreakdownPart part, SteadyThermalPath path
             return Measurements.unresolved(this, r.capK(), tLocalK);
         }
         return Measurements.unresolved(this, ((ThermalOutcome.NotConverged) out).lastTjK(), tLocalK);
+    }
+
+    /**
+     * This position's surges (none when it has none) applied at the converged point {@code p} of {@code instance}:
+     * the same transient evaluation the corner analysis runs at its hottest corner per clamp line.
+     */
+    public List<SurgeResult> surgesAt(PositionInstance instance, OperatingPoint p) {
+        return SurgeChecks.at(this, instance, p);
+    }
+
+    /**
+     * As {@link #ruleContext(PositionInstance, ThermalOutcome, double)} at a converged point, with the surge
+     * results {@code surges} (from {@link #surgesAt}) joining the steady-state quantities.
+     */
+    public RuleContext ruleContext(PositionInstance instance, OperatingPoint p, double tLocalK,
+                                   List<SurgeResult> surges) {
+        return Measurements.of(this, instance, p, allowedPowerW(p), resistorAllowedW(tLocalK), surges);
     }
 
     /** Relative disagreement above which the rating curve's implied resistance is flagged (1): 10 %, well beyond

@@ -32,6 +32,15 @@ public sealed interface Distribution permits Distribution.Uniform, Distribution.
     String label();
 
     /**
+     * {@link #valueAt} for one fixed range, with whatever depends on the range alone worked out once (for a
+     * truncated normal, the cumulative probabilities of both cuts): what a sampling loop calls per draw. Gives the
+     * same value as {@code valueAt(range, u)} for every {@code u}.
+     */
+    default java.util.function.DoubleUnaryOperator inverseCdf(Range range) {
+        return u -> valueAt(range, u);
+    }
+
+    /**
      * Uniform between {@code lo} and {@code hi}, whatever the nominal: mean {@code (lo + hi)/2}, standard deviation
      * {@code (hi − lo)/√12} (any probability text, e.g. Papoulis, <i>Probability, Random Variables and Stochastic
      * Processes</i>, the uniform density).
@@ -88,19 +97,26 @@ public sealed interface Distribution permits Distribution.Uniform, Distribution.
 
         @Override
         public double valueAt(Range r, double u) {
+            return inverseCdf(r).applyAsDouble(u);
+        }
+
+        @Override
+        public java.util.function.DoubleUnaryOperator inverseCdf(Range r) {
             if (!r.varies()) {
-                return r.nominal();
+                double v = r.nominal();
+                return u -> v;
             }
             double s = sigma(r);
-            double p = u;
-            if (truncated) {
-                double fa = phi(standardised(r.lo(), r));
-                double fb = phi(standardised(r.hi(), r));
-                p = fa + u * (fb - fa);
-            }
-            double x = r.nominal() + s * inversePhi(p);
-            // The inverse CDF is accurate to a few ulps of the standardised value; clamp its rounding at the cut.
-            return truncated ? Math.min(r.hi(), Math.max(r.lo(), x)) : x;
+            double nominal = r.nominal();
+            double lo = r.lo();
+            double hi = r.hi();
+            double fa = truncated ? phi(standardised(lo, r)) : 0.0;
+            double width = truncated ? phi(standardised(hi, r)) - fa : 1.0;
+            return u -> {
+                double x = nominal + s * inversePhi(fa + u * width);
+                // The inverse CDF is accurate to a few ulps of the standardised value; clamp its rounding at the cut.
+                return truncated ? Math.min(hi, Math.max(lo, x)) : x;
+            };
         }
 
         @Override

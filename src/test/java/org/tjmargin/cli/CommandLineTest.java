@@ -52,7 +52,8 @@ class CommandLineTest {
 
     @Test
     void jsonCarriesTheContractKeys() throws IOException {
-        Run r = run("analyse", "demo/design.yaml", "--out", tmp.resolve("o").toString(), "--json");
+        Run r = run("analyse", "demo/design.yaml", "--out", tmp.resolve("o").toString(), "--json",
+                "--samples", "500");
         assertEquals(ExitCodes.PASS, r.status(), r.err());
         JsonNode root = new ObjectMapper().readTree(r.out());
         JsonNode d1 = root.get("positions").get(0);
@@ -70,6 +71,39 @@ class CommandLineTest {
     }
 
     @Test
+    void statisticsReachTheTableTheJsonAndTheirCsvFiles() throws IOException {
+        Path out = tmp.resolve("stats");
+        Run r = run("analyse", "demo/design.yaml", "--out", out.toString(), "--samples", "1000", "--seed", "5",
+                "--quiet");
+        assertEquals(ExitCodes.PASS, r.status(), r.err());
+        assertTrue(r.out().contains("statistics at 55.0 °C ambient (seed 5"), r.out());
+        assertEquals("", r.err(), "no progress bar where the console is not interactive");
+        JsonNode root = new ObjectMapper().readTree(Files.readString(out.resolve("results.json")));
+        assertEquals(1000, root.get("statistics").get("samples").asLong());
+        JsonNode d1 = root.get("positions").get(0).get("statistics");
+        for (String k : new String[] {"corners", "rss", "monteCarlo", "tornado", "yield"}) {
+            assertTrue(d1.has(k), k);
+        }
+        assertEquals(1000, d1.get("monteCarlo").get("samples").asLong());
+        assertTrue(d1.get("monteCarlo").get("violation").has("upper"));
+        assertEquals(root.get("positions").size(), Files.readAllLines(out.resolve("spread.csv")).size() / 3,
+                "three methods per position plus a header");
+        assertTrue(Files.readString(out.resolve("yield.csv")).startsWith("position,ambientC,tLocalC,yield"));
+        assertTrue(Files.readString(out.resolve("sensitivity.csv")).contains("D1,1,"));
+    }
+
+    @Test
+    void noStatisticsSkipsThemAndTheirFiles() throws IOException {
+        Path out = tmp.resolve("nostats");
+        Run r = run("analyse", "demo/design.yaml", "--out", out.toString(), "--no-statistics");
+        assertEquals(ExitCodes.PASS, r.status(), r.err());
+        assertFalse(r.out().contains("statistics at"));
+        assertFalse(Files.exists(out.resolve("spread.csv")));
+        assertTrue(new ObjectMapper().readTree(Files.readString(out.resolve("results.json"))).get("statistics")
+                .isNull());
+    }
+
+    @Test
     void badInputGivesStatusTwoLocatedMessageAndWritesNothing() {
         Path out = tmp.resolve("never");
         Run r = run("analyse", "src/test/resources/bad-input/negative-resistance.yaml", "--out", out.toString());
@@ -82,7 +116,7 @@ class CommandLineTest {
     @Test
     void policyOptionOverridesTheDesignAndCanMakeItFail() {
         Run r = run("analyse", "demo/design.yaml", "--out", tmp.resolve("p").toString(), "--policy",
-                "high-reliability");
+                "high-reliability", "--no-statistics");
         assertEquals(ExitCodes.VIOLATION, r.status(), r.err());
         assertTrue(r.out().contains("policy: high-reliability"));
         assertTrue(r.out().contains("FAIL"));
@@ -92,7 +126,7 @@ class CommandLineTest {
     void profileFileWithATemperatureCurveLimitReachesEveryWriter() throws IOException {
         Path out = tmp.resolve("curve");
         Run r = run("analyse", "demo/design.yaml", "--out", out.toString(), "--policy",
-                "src/test/resources/profiles/child-of-industrial.yaml");
+                "src/test/resources/profiles/child-of-industrial.yaml", "--no-statistics");
         assertTrue(r.status() == ExitCodes.PASS || r.status() == ExitCodes.VIOLATION, r.err());
         assertTrue(Files.readString(out.resolve("report.html")).contains("by reference temperature"));
         assertTrue(Files.readString(out.resolve("results.json")).contains("by reference temperature"));

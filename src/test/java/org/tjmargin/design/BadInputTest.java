@@ -85,7 +85,14 @@ class BadInputTest {
                 Arguments.of("surge-waveform-front-after-half-value.yaml", Kind.WRONG_TYPE, 18, 47,
                         "parts[0].surge.waveform"),
                 Arguments.of("zth-times-not-increasing.yaml", Kind.INCONSISTENT, 26, 20,
-                        "parts[0].surge.transient.zth[1].time"));
+                        "parts[0].surge.transient.zth[1].time"),
+                Arguments.of("unknown-distribution.yaml", Kind.WRONG_TYPE, 15, 29,
+                        "positions[0].distributions.supply"),
+                Arguments.of("distribution-axis-not-in-circuit.yaml", Kind.INCONSISTENT, 12, 27,
+                        "positions[0].distributions.load"),
+                Arguments.of("normal-distribution-reaches-zero.yaml", Kind.NOT_PHYSICAL, 16, 38,
+                        "positions[0].distributions.series-resistor"),
+                Arguments.of("statistics-samples-not-a-count.yaml", Kind.WRONG_TYPE, 6, 23, "statistics.samples"));
     }
 
     @ParameterizedTest(name = "{0}")

@@ -166,6 +166,7 @@ class DemoDesignTest {
     @Test
     void jsonMirrorMapsToTheSameBoard() {
         assertEquals(DesignLoader.load(DEMO).board(), DesignLoader.load(JSON_MIRROR).board());
+        assertEquals(DesignLoader.load(DEMO).statistics(), DesignLoader.load(JSON_MIRROR).statistics());
     }
 
     @Test

@@ -56,4 +56,20 @@ class DistributionTest {
         // A fixed value stays fixed.
         assertEquals(4.0, new Distribution.Normal(3.0, true).valueAt(Range.exact(4.0), 0.9), 0.0);
     }
+
+    /** The per-range sampler a Monte Carlo loop calls gives exactly the value of {@code valueAt}, for any draw. */
+    @Test
+    void preparedInverseCdfEqualsValueAt() {
+        SplitMix64 rng = new SplitMix64(42);
+        Range r = new Range(9.0, 10.0, 12.0);
+        for (Distribution d : java.util.List.of(Distribution.UNIFORM, new Distribution.Triangular(),
+                new Distribution.Normal(3, true), new Distribution.Normal(2.5, false))) {
+            var f = d.inverseCdf(r);
+            for (int k = 0; k < 10_000; k++) {
+                double u = rng.nextOpenUnit();
+                org.junit.jupiter.api.Assertions.assertEquals(d.valueAt(r, u), f.applyAsDouble(u), 0.0, d.label());
+            }
+            org.junit.jupiter.api.Assertions.assertEquals(7.0, d.inverseCdf(Range.exact(7.0)).applyAsDouble(0.3));
+        }
+    }
 }

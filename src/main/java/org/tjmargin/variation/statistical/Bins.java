@@ -22,12 +22,19 @@ final class Bins {
     /**
      * Edges that hold the values a corner scan found, {@code [min, max]}, padded by 10 % of their span on each side
      * (values between corners of a non-monotone response may reach a little beyond them), and by
-     * {@code minHalfWidth} when the span is smaller than that.
+     * {@code minHalfWidth} when the span is smaller than that, and by at least {@value #RELATIVE_PAD} of the
+     * values' magnitude: a ratio rule's stand-in value where a rating has fallen to zero gives margins near
+     * {@code -1e15}, where a fixed half-width is below the spacing of doubles and both edges would round to one.
      */
     static Bins around(double min, double max, double minHalfWidth, int bins) {
-        double pad = Math.max(0.1 * (max - min), minHalfWidth);
+        double pad = Math.max(Math.max(0.1 * (max - min), minHalfWidth),
+                RELATIVE_PAD * Math.max(Math.abs(min), Math.abs(max)));
         return new Bins(min - pad, max + pad, bins);
     }
+
+    /** Smallest pad relative to the magnitude of the edges (1): far above the 1.1e-16 spacing of doubles, far
+     * below any span a report shows at an ordinary magnitude (1e-6 of a 400 K junction is 0.4 mK). */
+    static final double RELATIVE_PAD = 1e-6;
 
     void add(double x) {
         if (x < lo) {

@@ -4,12 +4,15 @@ import java.util.List;
 import java.util.Optional;
 import org.tjmargin.derating.Policy;
 import org.tjmargin.derating.RuleCheck;
+import org.tjmargin.derating.RuleContext;
 import org.tjmargin.solve.OperatingPoint;
 import org.tjmargin.solve.PointStatus;
 import org.tjmargin.solve.PositionInstance;
 import org.tjmargin.solve.PositionSpec;
 import org.tjmargin.solve.SolverSettings;
 import org.tjmargin.solve.ThermalOutcome;
+import org.tjmargin.surge.ClampTransientOutcome;
+import org.tjmargin.surge.SurgeResult;
 import org.tjmargin.variation.AxisValues;
 
 /**
@@ -21,8 +24,22 @@ import org.tjmargin.variation.AxisValues;
  * @param policy   the rules (at most 63, for the violation bit mask)
  * @param tLocalK  local air temperature (K), e.g. the position's air at the worst-case board balance
  * @param settings the junction solve's budgets and tolerances
+ * @param withSurges true to run the position's surges (if it has any) at every converged point, so that the surge
+ *                 rules join the steady-state ones; each surge is a coupled transient (≈ 1 ms), so a run with
+ *                 surges costs far more per sample than one without
  */
-public record PointEvaluator(PositionSpec spec, Policy policy, double tLocalK, SolverSettings settings) {
+public record PointEvaluator(PositionSpec spec, Policy policy, double tLocalK, SolverSettings settings,
+                             boolean withSurges) {
+
+    /** An evaluator of the steady-state rules only (surges not run). */
+    public PointEvaluator(PositionSpec spec, Policy policy, double tLocalK, SolverSettings settings) {
+        this(spec, policy, tLocalK, settings, false);
+    }
+
+    /** True when this evaluator runs surges: asked for and the position has some. */
+    public boolean runsSurges() {
+        return withSurges && spec.surges().isPresent();
+    }
 
     public PointEvaluator {
         if (spec == null || policy == null || settings == null) {
@@ -42,7 +59,19 @@ public record PointEvaluator(PositionSpec spec, Policy policy, double tLocalK, S
         Optional<OperatingPoint> fast = LinearFastPath.solve(inst, tLocalK, settings);
         ThermalOutcome out = fast.<ThermalOutcome>map(ThermalOutcome.Converged::new)
                 .orElseGet(() -> inst.solve(tLocalK, settings));
-        List<RuleCheck> checks = policy.check(spec.ruleContext(inst, out, tLocalK));
+        boolean surgeStopped = false;
+        RuleContext ctx;
+        if (runsSurges() && out instanceof ThermalOutcome.Converged c) {
+            List<SurgeResult> surges = spec.surgesAt(inst, c.point());
+            // A transient stopped for numerical reasons has no answer to stand behind (as in the corner analysis);
+            // runaway within the pulse is a physical answer that the surge rules fail from its peak Tj.
+            surgeStopped = surges.stream().anyMatch(sr -> sr.stopped().isPresent()
+                    && sr.stopped().get() != ClampTransientOutcome.Reason.JUNCTION_RUNAWAY);
+            ctx = spec.ruleContext(inst, c.point(), tLocalK, surges);
+        } else {
+            ctx = spec.ruleContext(inst, out, tLocalK);
+        }
+        List<RuleCheck> checks = policy.check(ctx);
         double margin = 1.0;
         String limiting = "none";
         long violated = 0;
@@ -58,7 +87,7 @@ public record PointEvaluator(PositionSpec spec, Policy policy, double tLocalK, S
         PointStatus status;
         double tj;
         if (out instanceof ThermalOutcome.Converged c) {
-            status = PointStatus.CONVERGED;
+            status = surgeStopped ? PointStatus.NOT_CONVERGED : PointStatus.CONVERGED;
             tj = c.point().tjK();
         } else if (out instanceof ThermalOutcome.Runaway r) {
             status = PointStatus.RUNAWAY;

@@ -23,6 +23,7 @@ final class SampleSpace {
     private final int[] ordinals;
     private final Range[] ranges;
     private final Distribution[] distributions;
+    private final java.util.function.DoubleUnaryOperator[] inverse;
     private final double[] nominal;
 
     SampleSpace(PositionSpec spec, VariationModel model) {
@@ -34,10 +35,12 @@ final class SampleSpace {
         ordinals = new int[list.size()];
         ranges = new Range[list.size()];
         distributions = new Distribution[list.size()];
+        inverse = new java.util.function.DoubleUnaryOperator[list.size()];
         for (int i = 0; i < list.size(); i++) {
             ordinals[i] = list.get(i).axis().ordinal();
             ranges[i] = list.get(i).toleranced().range();
             distributions[i] = list.get(i).toleranced().distribution();
+            inverse[i] = distributions[i].inverseCdf(ranges[i]);
         }
         nominal = new double[AXES.length];
         for (Axis a : AXES) {
@@ -57,7 +60,7 @@ final class SampleSpace {
     /** Fills the varying axes of {@code into} with the next draw of {@code rng}. */
     void draw(SplitMix64 rng, double[] into) {
         for (int i = 0; i < ordinals.length; i++) {
-            into[ordinals[i]] = distributions[i].valueAt(ranges[i], rng.nextOpenUnit());
+            into[ordinals[i]] = inverse[i].applyAsDouble(rng.nextOpenUnit());
         }
     }
 

@@ -30,16 +30,19 @@ public final class YieldCurve {
      */
     public static List<YieldPoint> of(List<BoardAtAmbient> sweep, int positionIndex, PositionSpec spec, Policy policy,
                                       VariationModel model, MonteCarloSettings settings, SolverSettings solver) {
-        return sweep.stream().map(b -> {
-            var p = b.positions().get(positionIndex);
-            if (!p.positionId().equals(spec.id())) {
-                throw new IllegalArgumentException("position " + positionIndex + " of the sweep is " + p.positionId()
-                        + ", not " + spec.id());
-            }
-            MonteCarloResult r = MonteCarlo.run(new PointEvaluator(spec, policy, p.tLocalK(), solver), model,
-                    settings);
-            WilsonInterval y = r.yield();
-            return new YieldPoint(b.ambientK(), p.tLocalK(), y.estimate(), y.lower(), y.upper(), y.trials());
-        }).toList();
+        return sweep.stream().map(b -> at(b, positionIndex, spec, policy, model, settings, solver)).toList();
+    }
+
+    /** The yield at one ambient of the sweep: the steady-state rules, the position's air from the board balance. */
+    static YieldPoint at(BoardAtAmbient b, int positionIndex, PositionSpec spec, Policy policy, VariationModel model,
+                         MonteCarloSettings settings, SolverSettings solver) {
+        var p = b.positions().get(positionIndex);
+        if (!p.positionId().equals(spec.id())) {
+            throw new IllegalArgumentException("position " + positionIndex + " of the sweep is " + p.positionId()
+                    + ", not " + spec.id());
+        }
+        MonteCarloResult r = MonteCarlo.run(new PointEvaluator(spec, policy, p.tLocalK(), solver), model, settings);
+        WilsonInterval y = r.yield();
+        return new YieldPoint(b.ambientK(), p.tLocalK(), y.estimate(), y.lower(), y.upper(), y.trials(), r.rules());
     }
 }

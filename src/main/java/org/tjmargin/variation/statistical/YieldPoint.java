@@ -9,7 +9,17 @@ package org.tjmargin.variation.statistical;
  * @param wilsonLo lower end of its 95 % Wilson score interval
  * @param wilsonHi upper end
  * @param samples  samples drawn
+ * @param rules    each policy rule's violating fraction there with its 95 % Wilson interval, in policy order
  */
 public record YieldPoint(double ambientK, double tLocalK, double yield, double wilsonLo, double wilsonHi,
-                         long samples) {
+                         long samples, java.util.List<RuleViolation> rules) {
+    public YieldPoint {
+        rules = java.util.List.copyOf(rules);
+    }
+
+    /** The rule violated by the most samples here, if any sample violates one. */
+    public java.util.Optional<RuleViolation> mostViolated() {
+        return rules.stream().filter(r -> r.probability().successes() > 0)
+                .max(java.util.Comparator.comparingLong(r -> r.probability().successes()));
+    }
 }

@@ -1,0 +1,179 @@
+package org.tjmargin.variation.statistical;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.ForkJoinPool;
+import java.util.concurrent.atomic.AtomicLong;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.tjmargin.derating.Policy;
+import org.tjmargin.design.DesignLoader;
+import org.tjmargin.design.LoadedDesign;
+import org.tjmargin.design.ProfileLoader;
+import org.tjmargin.solve.Analysis;
+import org.tjmargin.solve.AnalysisResult;
+import org.tjmargin.solve.SolverSettings;
+import org.tjmargin.variation.Axis;
+import org.tjmargin.variation.Distribution;
+
+/**
+ * The statistics stage on the (invented) demo board: what the design file asks for reaches the runs, the runs
+ * agree with each other where they must, and the result does not depend on the number of threads.
+ */
+class StatisticalAnalysisTest {
+
+    static final Path DEMO = Path.of("demo/design.yaml");
+
+    static LoadedDesign loaded;
+    static AnalysisResult result;
+    static StatisticsPlan plan;
+    static StatisticsResult stats;
+
+    @BeforeAll
+    static void run() {
+        loaded = DesignLoader.load(DEMO);
+        Policy policy = ProfileLoader.shipped("general-commercial").policy().withBuiltInMinimum();
+        result = Analysis.run(loaded.board(), policy, SolverSettings.DEFAULT);
+        StatisticsPlan design = loaded.statistics().orElseThrow();
+        // A smaller budget than the demo's, to keep the suite fast; the seed and the distributions are the design's.
+        plan = new StatisticsPlan(MonteCarloSettings.of(3000, design.settings().seed()), 6, 12, design.models());
+        stats = StatisticalAnalysis.run(result, plan, SolverSettings.DEFAULT, StatisticsProgress.NONE);
+    }
+
+    @Test
+    void theDesignsStatisticsBlockAndDistributionsAreRead() {
+        StatisticsPlan p = loaded.statistics().orElseThrow();
+        assertEquals(10_000, p.settings().samples());
+        assertEquals(20_261_202L, p.settings().seed());
+        assertEquals(16, p.yieldPoints());
+        assertEquals(200, p.surgeSamples());
+        var d1 = p.modelFor("D1");
+        assertEquals(new Distribution.Normal(3, true), d1.distribution(Axis.SERIES_RESISTOR));
+        assertEquals(new Distribution.Normal(3, true), d1.distribution(Axis.VZ));
+        assertEquals(new Distribution.Triangular(), d1.distribution(Axis.THERMAL_RESISTANCE));
+        // Not named: uniform, the default.
+        assertEquals(Distribution.UNIFORM, d1.distribution(Axis.SUPPLY));
+        assertEquals(Distribution.UNIFORM, p.modelFor("D2").distribution(Axis.SUPPLY));
+    }
+
+    @Test
+    void commandLineSamplesAndSeedOverrideTheDesign() {
+        StatisticsPlan p = loaded.statisticsWith(Optional.of(500L), Optional.of(9L));
+        assertEquals(500, p.settings().samples());
+        assertEquals(9, p.settings().seed());
+        assertEquals(200, p.surgeSamples());
+        assertEquals(loaded.statistics().orElseThrow().models(), p.models());
+    }
+
+    @Test
+    void everyPositionHasItsRunsAtTheHighestAmbient() {
+        assertEquals(result.board().positions().size(), stats.positions().size());
+        for (PositionStatistics p : stats.positions()) {
+            assertEquals(result.board().ambient().maxK(), p.ambientK(), 1e-9);
+            boolean surges = result.board().positions().stream().filter(s -> s.id().equals(p.positionId()))
+                    .findFirst().orElseThrow().surges().isPresent();
+            assertEquals(surges, p.surgesIncluded(), p.positionId());
+            assertEquals(surges ? plan.surgeSamples() : plan.settings().samples(), p.monteCarlo().settings().samples());
+            assertEquals(plan.yieldPoints(), p.yield().size());
+            assertTrue(p.rss() instanceof RssOutcome.Spread, p.positionId());
+        }
+    }
+
+    /**
+     * Worst-case corners bound the sampled junction temperatures. Every input is drawn inside its range (uniform,
+     * triangular, truncated normal) and each position's Tj is monotone in every input over its range, so the
+     * extreme-value analysis must bracket every sample (Monte Carlo within the corners: textbook property of a
+     * monotone function on a box, its extremes at vertices). Tolerance: the solver's 1e-9 K.
+     */
+    @Test
+    void cornersBracketTheSampledJunctionTemperatures() {
+        for (PositionStatistics p : stats.positions()) {
+            var mc = p.monteCarlo();
+            assertEquals(0, mc.tjHistogram().underflow() + mc.tjHistogram().overflow(), p.positionId());
+            assertTrue(mc.tj().mean() >= p.corners().tjMinK() - 1e-9 && mc.tj().mean() <= p.corners().tjMaxK()
+                    + 1e-9, p.positionId());
+            if (p.corners().margin() >= 0) {
+                assertEquals(0, mc.violation().successes(), p.positionId() + ": every corner passes, so no sample"
+                        + " inside the box can fail a rule monotone in the inputs");
+            }
+        }
+    }
+
+    /**
+     * Common random numbers: the same parts at every ambient. D1's junction only heats with ambient, so its yield
+     * can only fall, never rise by sampling noise; where no surges run, the curve's last point is the highest-
+     * ambient run itself.
+     */
+    @Test
+    void yieldFallsWithAmbientAndEndsAtTheHighestAmbientRun() {
+        PositionStatistics d1 = stats.of("D1").orElseThrow();
+        List<YieldPoint> y = d1.yield();
+        for (int k = 1; k < y.size(); k++) {
+            assertTrue(y.get(k).ambientK() > y.get(k - 1).ambientK());
+            assertTrue(y.get(k).yield() <= y.get(k - 1).yield(), "yield rose at " + y.get(k).ambientK());
+        }
+        assertEquals(result.board().ambient().minK(), y.get(0).ambientK(), 1e-9);
+        assertEquals(d1.monteCarlo().yield().estimate(), y.get(y.size() - 1).yield(), 0.0);
+    }
+
+    /**
+     * Root-sum-square against Monte Carlo on the near-linear current-fed reference D2 (JCGM 100:2008, §5.1.2: the
+     * first-order law is exact for a linear model; D2's Tj is linear in its inputs to about 1 %): the spreads agree
+     * within the Monte Carlo's own sampling error of σ at 3000 samples (σ/√(2n) ≈ 1.3 %) plus the nonlinearity,
+     * taken together as 6 %.
+     */
+    @Test
+    void rssAndMonteCarloAgreeOnTheNearLinearReference() {
+        PositionStatistics d2 = stats.of("D2").orElseThrow();
+        double rss = ((RssOutcome.Spread) d2.rss()).tjSigmaK();
+        double mc = d2.monteCarlo().tj().standardDeviation();
+        assertEquals(rss, mc, 0.06 * rss, "RSS " + rss + " K, Monte Carlo " + mc + " K");
+    }
+
+    @Test
+    void progressCountsEverySampleOnce() {
+        AtomicLong last = new AtomicLong();
+        AtomicLong total = new AtomicLong();
+        StatisticalAnalysis.run(result, plan, SolverSettings.DEFAULT, (done, all) -> {
+            last.accumulateAndGet(done, Math::max);
+            total.set(all);
+        });
+        assertEquals(total.get(), last.get());
+        long expected = 0;
+        for (var s : result.board().positions()) {
+            expected += StatisticalAnalysis.samplesOf(s, plan, plan.yieldPoints());
+        }
+        assertEquals(expected, total.get());
+    }
+
+    @Test
+    void yieldAmbientsIncludeBothEndsOnce() {
+        assertEquals(List.of(0, 25, 50, 75), java.util.Arrays.stream(StatisticalAnalysis.yieldIndices(76, 4))
+                .boxed().toList());
+        assertEquals(List.of(0, 1, 2), java.util.Arrays.stream(StatisticalAnalysis.yieldIndices(3, 16))
+                .boxed().toList());
+    }
+
+    @Test
+    void resultsAreIdenticalOnOneAndFourThreads() throws Exception {
+        StatisticsResult one = inPool(1);
+        StatisticsResult four = inPool(4);
+        assertEquals(one, four);
+        assertFalse(one.positions().isEmpty());
+    }
+
+    private static StatisticsResult inPool(int threads) throws Exception {
+        ForkJoinPool pool = new ForkJoinPool(threads);
+        try {
+            return pool.submit(() -> StatisticalAnalysis.run(result, plan, SolverSettings.DEFAULT,
+                    StatisticsProgress.NONE)).get();
+        } finally {
+            pool.shutdown();
+        }
+    }
+}
