@@ -103,7 +103,7 @@ public record BreakdownDiode(double vz0At25V, double rzOhm, double iztA, double 
      * @return reverse voltage (V)
      */
     public double breakdownVoltageV(double currentA, double tjK) {
-        return voltageOnCharacteristic(vz0V(tjK), rzOhm, iztA, knee, currentA);
+        return PreparedDiode.of(this).breakdownVoltageV(currentA, tjK);
     }
 
     private static double voltageOnCharacteristic(double vz0V, double rzOhm, double iztA, KneeModel knee,
@@ -112,22 +112,17 @@ public record BreakdownDiode(double vz0At25V, double rzOhm, double iztA, double 
             return vz0V + rzOhm * currentA;
         }
         KneeModel.CurrentDependent k = (KneeModel.CurrentDependent) knee;
-        // V(I) = V(Izt) − ∫_I^Izt (a/x + b) dx, continuous with the line in value and slope at Izt.
-        return vz0V + rzOhm * iztA - k.aVolts() * Math.log(iztA / currentA) - k.bOhm() * (iztA - currentA);
+        return PreparedDiode.kneeLawVoltageV(vz0V, rzOhm * iztA, k.aVolts(), k.bOhm(), iztA, currentA);
     }
 
     /** Dynamic impedance {@code dV/dI} of the breakdown characteristic at {@code currentA} ≥ {@code Izk} (Ω). */
     public double dynamicImpedanceOhm(double currentA) {
-        if (currentA >= iztA || knee instanceof KneeModel.Linear) {
-            return rzOhm;
-        }
-        KneeModel.CurrentDependent k = (KneeModel.CurrentDependent) knee;
-        return k.aVolts() / currentA + k.bOhm();
+        return PreparedDiode.of(this).dynamicImpedanceOhm(currentA);
     }
 
     /** Voltage at the knee current {@code Izk}, the lower end of regulation (V). */
     public double kneeVoltageV(double tjK) {
-        return breakdownVoltageV(izkA, tjK);
+        return PreparedDiode.of(this).kneeVoltageV(tjK);
     }
 
     /**
@@ -139,27 +134,7 @@ public record BreakdownDiode(double vz0At25V, double rzOhm, double iztA, double 
      * @return reverse current (A), ≤ {@code Izk}
      */
     public double subKneeCurrentA(double voltageV, double tjK) {
-        if (voltageV <= 0) {
-            return 0.0;
-        }
-        double vzk = kneeVoltageV(tjK);
-        if (!leakage.isKnown()) {
-            // No leakage data: the knee closes along a straight segment from zero current at
-            // KNEE_CLOSURE·Vzk to Izk at Vzk, so that current and dissipation stay continuous in voltage and
-            // temperature (a vertical edge would leave the heat balance without a root at the edge).
-            double v0 = KNEE_CLOSURE * vzk;
-            return voltageV <= v0 ? 0.0 : izkA * Math.min(1.0, (voltageV - v0) / (vzk - v0));
-        }
-        double vrT = leakageVoltageV(vzk);
-        double irT = Math.min(leakage.currentAtTestVoltageA(tjK), leakageSplitA());
-        if (voltageV <= vrT) {
-            return irT * voltageV / vrT;
-        }
-        if (voltageV >= vzk) {
-            return izkA;
-        }
-        double f = (voltageV - vrT) / (vzk - vrT);
-        return irT * Math.pow(izkA / irT, f);
+        return PreparedDiode.of(this).subKneeCurrentA(voltageV, tjK);
     }
 
     /**
@@ -171,16 +146,7 @@ public record BreakdownDiode(double vz0At25V, double rzOhm, double iztA, double 
      * characteristic continuous in temperature and monotone in voltage at every temperature.
      */
     public double excessLeakageConductanceS(double tjK) {
-        if (!leakage.isKnown()) {
-            return 0.0;
-        }
-        // Cheap exit on the hot path: the leakage reaches the split only after log2(split/Ir) doublings, and the
-        // binary exponent of that ratio is a lower bound of its log2 (no power function needed below it).
-        if ((tjK - Celsius.T25_K) / leakage.doublingK() < Math.getExponent(leakageSplitA() / leakage.irA())) {
-            return 0.0;
-        }
-        double excess = leakage.currentAtTestVoltageA(tjK) - leakageSplitA();
-        return excess > 0 ? excess / leakageVoltageV(kneeVoltageV(tjK)) : 0.0;
+        return PreparedDiode.of(this).excessLeakageConductanceS(tjK);
     }
 
     /**
@@ -188,34 +154,7 @@ public record BreakdownDiode(double vz0At25V, double rzOhm, double iztA, double 
      * excess leakage. Monotone in voltage.
      */
     public double reverseCurrentA(double voltageV, double tjK) {
-        double excess = excessLeakageConductanceS(tjK) * Math.max(0.0, voltageV);
-        if (voltageV < kneeVoltageV(tjK)) {
-            return subKneeCurrentA(voltageV, tjK) + excess;
-        }
-        double lineI = (voltageV - vz0V(tjK)) / rzOhm;
-        if (lineI >= lineStartA()) {
-            return lineI + excess;
-        }
-        // On the current-dependent knee: invert V(I) by bisection (monotone; 200 halvings reach double resolution).
-        double lo = izkA;
-        double hi = iztA;
-        for (int i = 0; i < 200 && hi - lo > 1e-15 * hi; i++) {
-            double mid = 0.5 * (lo + hi);
-            if (breakdownVoltageV(mid, tjK) < voltageV) {
-                lo = mid;
-            } else {
-                hi = mid;
-            }
-        }
-        return 0.5 * (lo + hi) + excess;
-    }
-
-    private double leakageSplitA() {
-        return 0.5 * izkA;
-    }
-
-    private double leakageVoltageV(double kneeAtTjV) {
-        return leakage.vrV() * kneeAtTjV / kneeVoltageV(Celsius.T25_K);
+        return PreparedDiode.of(this).reverseCurrentA(voltageV, tjK);
     }
 
     /** Copy with the breakdown line shifted by {@code deltaV} (a tolerance corner of {@code Vz}). */

@@ -7,11 +7,9 @@ package org.tjmargin.device;
  * <p>The knee voltage at any temperature is the breakdown line's intercept plus a constant drop (the knee law's
  * logarithm at {@code Izk} does not depend on temperature), the leakage voltage point scales with the knee voltage
  * at 25 °C, and the temperature below which no leakage exceeds the split is a binary exponent: all computed here
- * once instead of at every evaluation. The equations are those of {@link BreakdownDiode}, which stays the
- * definition; every method here returns bit for bit what the diode's method of the same name returns, because
- * each hoisted constant is the same subexpression, evaluated in the same order (Java's floating point is
- * strict: no fused or reordered operations). {@code PreparedDiodeTest} holds the two equal over seeded random
- * diodes, temperatures, currents and voltages.
+ * once instead of at every evaluation. This class is the one implementation of the characteristic whose equations
+ * and reasons {@link BreakdownDiode} documents; the diode's methods of the same names delegate here (preparing
+ * per call), so a solver that prepares once per solve and a caller that asks the diode get the same values.
  *
  * <p>Immutable and thread-safe.
  */
@@ -115,7 +113,17 @@ public final class PreparedDiode {
         if (currentA >= iztA || linearKnee) {
             return vz0 + rzOhm * currentA;
         }
-        return vz0 + rzIztV - kneeAVolts * Math.log(iztA / currentA) - kneeBOhm * (iztA - currentA);
+        return kneeLawVoltageV(vz0, rzIztV, kneeAVolts, kneeBOhm, iztA, currentA);
+    }
+
+    /**
+     * The knee law's voltage: {@code V(I) = V(Izt) − ∫_I^Izt (a/x + b) dx}, continuous with the line in value and
+     * slope at {@code Izt} (see {@link KneeModel.CurrentDependent}); also what the diode's constructor checks its
+     * data with.
+     */
+    static double kneeLawVoltageV(double vz0V, double rzIztV, double aVolts, double bOhm, double iztA,
+                                  double currentA) {
+        return vz0V + rzIztV - aVolts * Math.log(iztA / currentA) - bOhm * (iztA - currentA);
     }
 
     /** As {@link BreakdownDiode#dynamicImpedanceOhm(double)} (Ω). */
@@ -126,7 +134,10 @@ public final class PreparedDiode {
         return kneeAVolts / currentA + kneeBOhm;
     }
 
-    /** As {@link BreakdownDiode#kneeVoltageV(double)} (V), without the logarithm. */
+    /**
+     * As {@link BreakdownDiode#kneeVoltageV(double)} (V): {@code breakdownVoltageV(Izk, Tj)} with its logarithm
+     * hoisted (the same subexpressions in the same order, so bit for bit the same).
+     */
     public double kneeVoltageV(double tjK) {
         double vz0 = vz0V(tjK);
         if (linearKnee) {
@@ -142,6 +153,9 @@ public final class PreparedDiode {
         }
         double vzk = kneeVoltageV(tjK);
         if (!leakageKnown) {
+            // No leakage data: the knee closes along a straight segment from zero current at
+            // KNEE_CLOSURE·Vzk to Izk at Vzk, so that current and dissipation stay continuous in voltage and
+            // temperature (a vertical edge would leave the heat balance without a root at the edge).
             double v0 = BreakdownDiode.KNEE_CLOSURE * vzk;
             return voltageV <= v0 ? 0.0 : izkA * Math.min(1.0, (voltageV - v0) / (vzk - v0));
         }
@@ -159,6 +173,8 @@ public final class PreparedDiode {
 
     /** As {@link BreakdownDiode#excessLeakageConductanceS(double)} (S). */
     public double excessLeakageConductanceS(double tjK) {
+        // Cheap exit: the leakage reaches the split only after log2(split/Ir) doublings, and the binary exponent of
+        // that ratio is a lower bound of its log2 (no power function needed below it).
         if (!leakageKnown || (tjK - Celsius.T25_K) / doublingK < splitExponent) {
             return 0.0;
         }
@@ -176,6 +192,7 @@ public final class PreparedDiode {
         if (lineI >= lineStartA) {
             return lineI + excess;
         }
+        // On the current-dependent knee: invert V(I) by bisection (monotone; 200 halvings reach double resolution).
         double lo = izkA;
         double hi = iztA;
         for (int i = 0; i < 200 && hi - lo > 1e-15 * hi; i++) {
