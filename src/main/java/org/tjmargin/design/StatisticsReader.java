@@ -71,31 +71,12 @@ final class StatisticsReader {
             return Optional.empty();
         }
         Fields f = of.get();
-        boolean ok = true;
-        long samples = StatisticsPlan.DEFAULT_SAMPLES;
-        if (f.has("samples")) {
-            Optional<Long> n = count(f, "samples", 1, 1_000_000_000L);
-            ok &= n.isPresent();
-            samples = n.orElse(samples);
-        }
-        long seed = StatisticsPlan.DEFAULT_SEED;
-        if (f.has("seed")) {
-            Optional<Long> s = count(f, "seed", Long.MIN_VALUE, Long.MAX_VALUE);
-            ok &= s.isPresent();
-            seed = s.orElse(seed);
-        }
-        int yieldPoints = StatisticsPlan.DEFAULT_YIELD_POINTS;
-        if (f.has("yield-points")) {
-            Optional<Long> y = count(f, "yield-points", 2, 1000);
-            ok &= y.isPresent();
-            yieldPoints = y.map(Long::intValue).orElse(yieldPoints);
-        }
-        long surgeSamples = StatisticsPlan.DEFAULT_SURGE_SAMPLES;
-        if (f.has("surge-samples")) {
-            Optional<Long> s = count(f, "surge-samples", 1, 1_000_000_000L);
-            ok &= s.isPresent();
-            surgeSamples = s.orElse(surgeSamples);
-        }
+        Optional<Long> samples = count(f, "samples", 1, 1_000_000_000L, StatisticsPlan.DEFAULT_SAMPLES);
+        Optional<Long> seed = count(f, "seed", Long.MIN_VALUE, Long.MAX_VALUE, StatisticsPlan.DEFAULT_SEED);
+        Optional<Long> yieldPoints = count(f, "yield-points", 2, 1000, StatisticsPlan.DEFAULT_YIELD_POINTS);
+        Optional<Long> surgeSamples = count(f, "surge-samples", 1, 1_000_000_000L,
+                StatisticsPlan.DEFAULT_SURGE_SAMPLES);
+        boolean ok = Fields.present(samples, seed, yieldPoints, surgeSamples);
         Distribution d = Distribution.UNIFORM;
         if (f.has("distribution")) {
             Optional<Distribution> read = distribution(f, "distribution");
@@ -105,7 +86,8 @@ final class StatisticsReader {
         if (!ok) {
             return Optional.empty();
         }
-        return Optional.of(new Header(MonteCarloSettings.of(samples, seed), yieldPoints, surgeSamples, d));
+        return Optional.of(new Header(MonteCarloSettings.of(samples.get(), seed.get()), yieldPoints.get().intValue(),
+                surgeSamples.get(), d));
     }
 
     /**
@@ -203,6 +185,11 @@ final class StatisticsReader {
         f.report(InputProblem.Kind.WRONG_TYPE, key, "expected a distribution: uniform, triangular, or normal Kσ"
                 + " [truncated] (e.g. 'normal 3σ truncated'), got '" + text.get() + "'");
         return Optional.empty();
+    }
+
+    /** The whole number at {@code key}, or {@code byDefault} when the key is absent; empty when reported. */
+    private static Optional<Long> count(Fields f, String key, long min, long max, long byDefault) {
+        return f.has(key) ? count(f, key, min, max) : Optional.of(byDefault);
     }
 
     /** A whole number in {@code [min, max]}, written without unit. */

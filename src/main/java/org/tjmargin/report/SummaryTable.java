@@ -82,8 +82,9 @@ public final class SummaryTable {
             String corners = Double.isNaN(p.corners().tjMaxK()) ? "-" : String.format(Locale.ROOT,
                     "%.1f … %.1f °C", Labels.celsius(p.corners().tjMinK()), Labels.celsius(p.corners().tjMaxK()));
             String top = p.tornado().bars().isEmpty() ? "-" : p.tornado().bars().get(0).axis().label();
-            rows.add(new String[] {p.positionId(), String.format(Locale.ROOT, "%s [%s, %s]", percent(v.estimate()),
-                percent(v.lower()), percent(v.upper())),
+            rows.add(new String[] {p.positionId(), String.format(Locale.ROOT, "%s [%s, %s]",
+                StatisticsFormat.probability(v.estimate()), StatisticsFormat.probability(v.lower()),
+                StatisticsFormat.probability(v.upper())),
                 mc.settings().samples() + (p.surgesIncluded() ? " (surges)" : ""),
                 mc.tj().count() == 0 ? "-" : String.format(Locale.ROOT, "%.1f °C ± %.2g K",
                         Labels.celsius(mc.tj().mean()), mc.tj().standardDeviation()),
@@ -95,14 +96,6 @@ public final class SummaryTable {
                 + "and histograms in the report):", Labels.celsius(ambient), st.plan().settings().seed()))
                 .append('\n');
         table(sb, rows);
-    }
-
-    private static String percent(double fraction) {
-        double pc = 100 * fraction;
-        if (pc == 0) {
-            return "0 %";
-        }
-        return String.format(Locale.ROOT, pc < 0.1 ? "%.2g %%" : "%.2f %%", pc);
     }
 
     private static void table(StringBuilder sb, List<String[]> rows) {

@@ -5,7 +5,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.tjmargin.derating.Policy;
-import org.tjmargin.surge.ClampTransientOutcome;
 import org.tjmargin.derating.RuleCheck;
 import org.tjmargin.derating.RuleContext;
 import org.tjmargin.surge.SurgeResult;
@@ -153,7 +152,7 @@ public final class BoardSolver {
                 OperatingPoint p = c.point();
                 allowed = spec.allowedPowerW(p);
                 surges = surgeAt[k] ? SurgeChecks.at(spec, inst, p) : List.of();
-                if (stoppedNumerically(surges)) {
+                if (SurgeResult.anyStoppedNumerically(surges)) {
                     // A surge transient that stopped for numerical reasons gives partial values only: the position
                     // has no answer the tool can stand behind (exit status 3), though its other checks are still
                     // shown. Runaway within the pulse is a physical answer: its peak Tj fails the surge rules.
@@ -198,16 +197,6 @@ public final class BoardSolver {
         }
         return new PositionAtAmbient(spec.id(), ambientK, tLocalK, corners, hottest, least,
                 new ArrayList<>(worst.values()), margin, limiting, status);
-    }
-
-    /** True when a surge transient stopped for a numerical reason (runaway within the pulse is a physical answer). */
-    private static boolean stoppedNumerically(List<SurgeResult> surges) {
-        for (SurgeResult sr : surges) {
-            if (sr.stopped().isPresent() && sr.stopped().get() != ClampTransientOutcome.Reason.JUNCTION_RUNAWAY) {
-                return true;
-            }
-        }
-        return false;
     }
 
     /** Heat of the board with the air at {@code tLocalK}: every position at its corner of greatest heat. */

@@ -74,4 +74,18 @@ public record SurgeResult(String caseId, double startTjK, ClampTransientResult p
         return protectedLimitV.isPresent() ? OptionalDouble.of(pulse.peakClampVoltageV() / protectedLimitV.getAsDouble())
                 : OptionalDouble.empty();
     }
+
+    /**
+     * True when the transient stopped for a numerical reason: it gives partial values only, so the point has no
+     * answer to stand behind. Runaway within the pulse is a physical answer (the surge rules fail it from its peak
+     * Tj) and does not count.
+     */
+    public boolean stoppedNumerically() {
+        return stopped.isPresent() && stopped.get() != ClampTransientOutcome.Reason.JUNCTION_RUNAWAY;
+    }
+
+    /** True when any of {@code surges} {@linkplain #stoppedNumerically() stopped numerically}. */
+    public static boolean anyStoppedNumerically(java.util.List<SurgeResult> surges) {
+        return surges.stream().anyMatch(SurgeResult::stoppedNumerically);
+    }
 }

@@ -11,7 +11,6 @@ import org.tjmargin.solve.PositionInstance;
 import org.tjmargin.solve.PositionSpec;
 import org.tjmargin.solve.SolverSettings;
 import org.tjmargin.solve.ThermalOutcome;
-import org.tjmargin.surge.ClampTransientOutcome;
 import org.tjmargin.surge.SurgeResult;
 import org.tjmargin.variation.AxisValues;
 
@@ -63,10 +62,8 @@ public record PointEvaluator(PositionSpec spec, Policy policy, double tLocalK, S
         RuleContext ctx;
         if (runsSurges() && out instanceof ThermalOutcome.Converged c) {
             List<SurgeResult> surges = spec.surgesAt(inst, c.point());
-            // A transient stopped for numerical reasons has no answer to stand behind (as in the corner analysis);
-            // runaway within the pulse is a physical answer that the surge rules fail from its peak Tj.
-            surgeStopped = surges.stream().anyMatch(sr -> sr.stopped().isPresent()
-                    && sr.stopped().get() != ClampTransientOutcome.Reason.JUNCTION_RUNAWAY);
+            // As in the corner analysis: a numerically stopped transient leaves the sample unresolved.
+            surgeStopped = SurgeResult.anyStoppedNumerically(surges);
             ctx = spec.ruleContext(inst, c.point(), tLocalK, surges);
         } else {
             ctx = spec.ruleContext(inst, out, tLocalK);

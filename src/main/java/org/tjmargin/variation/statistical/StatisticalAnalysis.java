@@ -12,7 +12,6 @@ import org.tjmargin.solve.PositionSpec;
 import org.tjmargin.solve.SolverSettings;
 import org.tjmargin.solve.ThermalOutcome;
 import org.tjmargin.variation.VariationModel;
-import org.tjmargin.variation.WilsonInterval;
 
 /**
  * The statistical analysis of a board after its corner analysis (design 2.7): for every position, at the design's
@@ -115,9 +114,7 @@ public final class StatisticalAnalysis {
         int last = result.sweep().size() - 1;
         List<YieldPoint> yield = IntStream.of(ambients).parallel().mapToObj(k -> {
             if (k == last && !surges) {
-                WilsonInterval y = mc.yield();
-                return new YieldPoint(hottest.ambientK(), at.tLocalK(), y.estimate(), y.lower(), y.upper(),
-                        y.trials(), mc.rules());
+                return YieldPoint.of(hottest.ambientK(), at.tLocalK(), mc);
             }
             YieldPoint p = YieldCurve.at(result.sweep().get(k), i, spec, policy, model, plan.settings(), solver);
             work.done(plan.settings().samples());

@@ -6,7 +6,6 @@ import org.tjmargin.solve.BoardAtAmbient;
 import org.tjmargin.solve.PositionSpec;
 import org.tjmargin.solve.SolverSettings;
 import org.tjmargin.variation.VariationModel;
-import org.tjmargin.variation.WilsonInterval;
 
 /**
  * Yield against ambient: the Monte Carlo probability of passing at each ambient of a sweep, the position's air
@@ -42,7 +41,6 @@ public final class YieldCurve {
                     + ", not " + spec.id());
         }
         MonteCarloResult r = MonteCarlo.run(new PointEvaluator(spec, policy, p.tLocalK(), solver), model, settings);
-        WilsonInterval y = r.yield();
-        return new YieldPoint(b.ambientK(), p.tLocalK(), y.estimate(), y.lower(), y.upper(), y.trials(), r.rules());
+        return YieldPoint.of(b.ambientK(), p.tLocalK(), r);
     }
 }

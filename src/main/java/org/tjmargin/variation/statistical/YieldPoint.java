@@ -17,6 +17,12 @@ public record YieldPoint(double ambientK, double tLocalK, double yield, double w
         rules = java.util.List.copyOf(rules);
     }
 
+    /** The yield of a Monte Carlo run at {@code ambientK}, whose air was {@code tLocalK}. */
+    public static YieldPoint of(double ambientK, double tLocalK, MonteCarloResult run) {
+        var y = run.yield();
+        return new YieldPoint(ambientK, tLocalK, y.estimate(), y.lower(), y.upper(), y.trials(), run.rules());
+    }
+
     /** The rule violated by the most samples here, if any sample violates one. */
     public java.util.Optional<RuleViolation> mostViolated() {
         return rules.stream().filter(r -> r.probability().successes() > 0)
