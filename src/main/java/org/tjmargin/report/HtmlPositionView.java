@@ -53,17 +53,17 @@ final class HtmlPositionView {
     private final PositionAtAmbient atMax;
     private final String anchor;
 
-    /** The anchor of the position's section, {@code pos-<stem>}. */
-    String anchor() {
-        return anchor;
-    }
-
     HtmlPositionView(AnalysisResult result, int index, String stem) {
         this.result = result;
         this.spec = result.board().positions().get(index);
         this.pr = result.positions().get(index);
         this.atMax = result.atMaximumAmbient().positions().get(index);
         this.anchor = "pos-" + stem;
+    }
+
+    /** The anchor of the position's section, {@code pos-<stem>}. */
+    String anchor() {
+        return anchor;
     }
 
     static HtmlView.Badge badge(Verdict v) {

@@ -19,7 +19,8 @@ import java.util.Locale;
  * design's highest ambient in long dashes, the found maximum ambient in a thin double-dot line in teal (the only
  * place a data colour marks a reference, because it is the answer the chart is about), thermal runaway in the
  * crimson-rose, and the worst-case corners' extremes beside a statistical spread in short dashes of ink. Histogram
- * and tornado bars are filled with the data inks, a confidence band with a translucent wash of its line's ink. Verdicts use muted pigments with white text (spruce for pass, brick for fail, aubergine for
+ * and tornado bars are filled with the data inks, a confidence band with a translucent wash of its line's ink
+ * (the renderer's alpha). Verdicts use muted pigments with white text (spruce for pass, brick for fail, aubergine for
  * runaway, umber for unresolved) so that no verdict depends on red/green alone: each also carries its word.
  *
  * <p>Colours are sRGB. Constants only; no state.
@@ -106,12 +107,6 @@ public final class Palette {
     /** A nominal value a spread is drawn about: thin, solid. */
     public static Stroke nominalLine() {
         return new BasicStroke(1.2f);
-    }
-
-    /** The {@code i}-th series ink at {@code alpha} (0 … 255), for bands and fills. */
-    public static Color wash(int i, int alpha) {
-        Color c = SERIES.get(Math.floorMod(i, SERIES.size()));
-        return new Color(c.getRed(), c.getGreen(), c.getBlue(), alpha);
     }
 
     /** A colour as a CSS hex string, {@code #rrggbb}. */
