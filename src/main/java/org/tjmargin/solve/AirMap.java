@@ -25,16 +25,19 @@ import org.tjmargin.thermal.Enclosure;
  * {@code x_j}, being the lowest root); above and below the sweep a lattice in {@code x} with the searches' step
  * ({@code max(5 K, sweep step)}), built as far as queries reach and, once {@code A} has turned down (the air itself
  * runs away), with steps doubling up to 200 K, the air balance's own longest reach; refinement samples at cell
- * midpoints. Between samples the map interpolates {@code A} linearly, only in cells whose error estimate is at most
- * {@code δ/2}, with {@code δ =} {@value #TOLERANCE_K} K; other cells are bisected (new exact samples, memoised for
- * every position) until they pass or are {@value #MIN_CELL_K} K wide.
+ * midpoints. Between samples the map interpolates {@code A} linearly, only in cells whose error bound is at most
+ * {@code δ =} {@value #TOLERANCE_K} K; other cells are bisected (new exact samples, memoised for every position)
+ * until they pass or are {@value #MIN_CELL_K} K wide.
  *
  * <p>Error bound. Linear interpolation of {@code A} over a cell of width {@code w} errs by at most
- * {@code |A''|·w²/8}; the estimate is {@code w²/2·|f[·,·,·]|} with {@code f[·,·,·]} the larger second divided
- * difference of the cell with either neighbour ({@code ≈ A''/2}), twice the bound for a locally quadratic {@code A},
- * and at least half the error where the cell holds a kink of {@code A} (a position's hottest corner changing, the
- * only non-smooth point of the board heat apart from runaway; worked out from the two divided differences across a
- * single kink). Accepting cells at {@code δ/2} therefore keeps {@code |A − Ã| ≤ δ} in both cases: the local air the
+ * {@code |A''|·w²/8}. The bound used is {@code 4·w²/2·|f|}, with {@code f} the smaller in magnitude of the second
+ * divided differences of the cell with its left and with its right neighbour ({@code ≈ A''/2} where {@code A} is
+ * smooth). For a locally quadratic {@code A} that is eight times the error. Where the cell holds a kink of {@code A}
+ * (a position's hottest corner changing, the only non-smooth point of the board heat apart from runaway) of slope
+ * change {@code s} at distance {@code ε} from its nearer end, the error is {@code s·ε·(w−ε)/w} and the smaller
+ * divided difference is {@code s·ε/(2w²)} (neighbours one cell away), so the bound is {@code s·ε} or more: at least
+ * the error (worked out from the two divided differences across a single kink). Accepting cells at {@code δ}
+ * therefore keeps {@code |A − Ã| ≤ δ} in both cases: the local air the
  * map returns for {@code Ta} is the exact lowest balance of an ambient within {@code δ} of {@code Ta}, and a search
  * on the map lands within {@code δ} of the search on exact board solves. Where {@code A} jumps (a corner starts to
  * run away and its heat is taken at the junction cap), the jump is located to {@value #MIN_CELL_K} K of air. The
@@ -79,25 +82,30 @@ final class AirMap implements AutoCloseable {
      * lowest balance {@code Tj*} only moves up when the air warms (its heat balance {@code Tj = x + Rθ·P(Tj)}
      * moves up), so a corner that runs away keeps running away, its heat taken at the cap, and a converged corner
      * keeps a diode power of at least {@code (Tj* − x − d)/Rθ = P − d/Rθ}. Each position's heat is at least that of
-     * its hottest corner at the sample, so the floor is the sum of the runaway heats plus, over the
-     * {@value #FLOOR_TERMS} positions of greatest diode power, {@code max(0, P − d/Rθ)}. It is what lets the map
-     * step over air that cannot balance (a corner whose balance has jumped to hundreds of degrees) without sampling
-     * it, and prove runaway where even the floor's rise exceeds the cap. (Up to the junction search's own caveat:
-     * it can step over a narrow excursion of a heat balance, see {@link SolverSettings#maxStepK()}.)
+     * its hottest corner at the sample, so the board heat is at least the runaway heats plus
+     * {@code Σ max(0, P − d/Rθ)} over the other positions; the floor is the larger of that sum over the
+     * {@value #FLOOR_TERMS} positions of greatest diode power and its linear lower bound {@code ΣP − d·Σ(1/Rθ)} over
+     * all. It is what lets the map step over air that cannot balance (corners whose balance has jumped to hundreds
+     * of degrees) without sampling it, and prove runaway where even the floor's rise exceeds the cap. (Up to the
+     * junction search's own caveat: it can step over a narrow excursion of a heat balance, see
+     * {@link SolverSettings#maxStepK()}.)
      *
-     * @param constantW  heat that stays in all hotter air: the runaway corners' (W)
-     * @param diodeW     the diode power of each kept position's hottest corner (W)
-     * @param perKelvinW its {@code 1/Rθ}: how fast that floor falls with the air (W/K)
+     * @param constantW       heat that stays in all hotter air: the runaway corners' (W)
+     * @param diodeW          the diode power of each kept position's hottest corner (W)
+     * @param perKelvinW      its {@code 1/Rθ}: how fast that floor falls with the air (W/K)
+     * @param allDiodeW       {@code ΣP} over every position whose hottest corner converged (W)
+     * @param allPerKelvinW   {@code Σ1/Rθ} over the same positions (W/K)
      */
-    record HeatFloor(double constantW, double[] diodeW, double[] perKelvinW) {
+    record HeatFloor(double constantW, double[] diodeW, double[] perKelvinW, double allDiodeW,
+                     double allPerKelvinW) {
 
         /** The floor of the board heat {@code dK ≥ 0} kelvin above the sample (W). */
         double atW(double dK) {
-            double sum = constantW;
+            double sum = 0;
             for (int i = 0; i < diodeW.length; i++) {
                 sum += Math.max(0.0, diodeW[i] - dK * perKelvinW[i]);
             }
-            return sum;
+            return constantW + Math.max(sum, allDiodeW - dK * allPerKelvinW);
         }
 
         /**
@@ -106,8 +114,14 @@ final class AirMap implements AutoCloseable {
          */
         static HeatFloor of(double[] runawayW, double[] diodeW, double[] perKelvinW) {
             double constant = 0;
-            for (double r : runawayW) {
-                constant += r;
+            double allP = 0;
+            double allG = 0;
+            for (int i = 0; i < runawayW.length; i++) {
+                constant += runawayW[i];
+                if (diodeW[i] > 0) {
+                    allP += diodeW[i];
+                    allG += perKelvinW[i];
+                }
             }
             Integer[] order = new Integer[diodeW.length];
             for (int i = 0; i < order.length; i++) {
@@ -121,7 +135,7 @@ final class AirMap implements AutoCloseable {
                 p[i] = diodeW[order[i]];
                 g[i] = perKelvinW[order[i]];
             }
-            return new HeatFloor(constant, p, g);
+            return new HeatFloor(constant, p, g, allP, allG);
         }
     }
 
@@ -335,19 +349,12 @@ final class AirMap implements AutoCloseable {
             return Double.NaN;
         }
         double w = b.tLocalK() - a.tLocalK();
-        double curvature = 0;
-        if (left != null) {
-            curvature = Math.max(curvature, Math.abs(dividedDifference(left, a, b)));
-        }
-        if (right != null) {
-            curvature = Math.max(curvature, Math.abs(dividedDifference(a, b, right)));
-        }
-        double estimate = w * w / 2 * curvature;
-        if (Math.max(a.ambientK(), b.ambientK()) + estimate < ambientK) {
-            // Even with its estimated error the interpolant stays below the ambient: no balance in this part.
+        double errorBound = errorBound(a, b, left, right);
+        if (Math.max(a.ambientK(), b.ambientK()) + errorBound < ambientK) {
+            // Even with its error bound the interpolant stays below the ambient: no balance in this part.
             return Double.NaN;
         }
-        if (estimate <= TOLERANCE_K / 2 || w <= MIN_CELL_K) {
+        if (errorBound <= TOLERANCE_K || w <= MIN_CELL_K) {
             return linearCrossing(a, b, start, ambientK);
         }
         Sample m = sample(a.tLocalK() + w / 2);
@@ -454,6 +461,28 @@ final class AirMap implements AutoCloseable {
             }
             return down.get(k);
         }
+    }
+
+    /**
+     * The estimated bound on the error of the straight line from {@code a} to {@code b} (K of ambient): four times
+     * {@code w²/2·|f|}, with {@code f} the smaller in magnitude of the second divided differences of the cell with
+     * its left and with its right neighbour. Both triples span the whole cell, so a kink or jump inside it shows in
+     * both, while one just outside shows in one only: the smaller localises the estimate to the cell (a jump next
+     * door does not make a smooth cell look curved). See the class comment for the factors.
+     */
+    private static double errorBound(Sample a, Sample b, Sample left, Sample right) {
+        double w = b.tLocalK() - a.tLocalK();
+        double f;
+        if (left != null && right != null) {
+            f = Math.min(Math.abs(dividedDifference(left, a, b)), Math.abs(dividedDifference(a, b, right)));
+        } else if (left != null) {
+            f = Math.abs(dividedDifference(left, a, b));
+        } else if (right != null) {
+            f = Math.abs(dividedDifference(a, b, right));
+        } else {
+            f = 0;
+        }
+        return 4 * (w * w / 2 * f);
     }
 
     /** The second divided difference {@code f[p, q, r]} of the samples' ambients over their air (1/K). */

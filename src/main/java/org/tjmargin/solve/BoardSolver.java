@@ -153,7 +153,7 @@ public final class BoardSolver {
                 OperatingPoint p = c.point();
                 allowed = spec.allowedPowerW(p);
                 surges = surgeAt[k] ? SurgeChecks.at(spec, inst, p) : List.of();
-                if (surges.stream().anyMatch(sr -> sr.stopped().isPresent()
+                if (!surges.isEmpty() && surges.stream().anyMatch(sr -> sr.stopped().isPresent()
                         && sr.stopped().get() != ClampTransientOutcome.Reason.JUNCTION_RUNAWAY)) {
                     // A surge transient that stopped for numerical reasons gives partial values only: the position
                     // has no answer the tool can stand behind (exit status 3), though its other checks are still
