@@ -28,13 +28,19 @@ public final class ChartSet {
 
     /** All charts of the analysis at {@code size}. */
     public static List<RenderedChart> render(AnalysisResult result, ChartSize size) {
+        return render(result, size, ReportDetail.all(result));
+    }
+
+    /** The charts of the detailed positions only, at {@code size}. */
+    public static List<RenderedChart> render(AnalysisResult result, ChartSize size, ReportDetail detail) {
         Objects.requireNonNull(result, "result");
         Objects.requireNonNull(size, "size");
+        Objects.requireNonNull(detail, "detail");
         List<String> stems = ChartNames.stems(result);
         record Task(int position, ChartKind kind) {
         }
         List<Task> tasks = new ArrayList<>();
-        for (int i = 0; i < result.positions().size(); i++) {
+        for (int i : detail.indices()) {
             for (ChartKind kind : kindsFor(result, i)) {
                 tasks.add(new Task(i, kind));
             }

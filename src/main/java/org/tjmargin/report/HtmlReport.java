@@ -66,11 +66,21 @@ public final class HtmlReport {
 
     /** Renders the report; see {@link #render(AnalysisResult, List, List, String, List)}. */
     public static String render(AnalysisResult result, ReportInputs inputs, List<RenderedChart> charts) {
+        return render(result, inputs, charts, ReportDetail.all(result));
+    }
+
+    /**
+     * Renders the report with a section for each detailed position only; every position keeps its row in the verdict
+     * table, and the page says which positions are detailed and where the others are.
+     */
+    public static String render(AnalysisResult result, ReportInputs inputs, List<RenderedChart> charts,
+                                ReportDetail detail) {
         Objects.requireNonNull(result, "result");
         Objects.requireNonNull(inputs, "inputs");
+        Objects.requireNonNull(detail, "detail");
         StringWriter out = new StringWriter(256 * 1024);
         try {
-            Template.PAGE.execute(out, page(result, inputs, charts)).flush();
+            Template.PAGE.execute(out, page(result, inputs, charts, detail)).flush();
         } catch (IOException e) {
             // A StringWriter never fails; an IOException here comes from a broken template engine.
             throw new UncheckedIOException("rendering the HTML report failed", e);
@@ -79,6 +89,11 @@ public final class HtmlReport {
     }
 
     static HtmlView.Page page(AnalysisResult result, ReportInputs inputs, List<RenderedChart> charts) {
+        return page(result, inputs, charts, ReportDetail.all(result));
+    }
+
+    static HtmlView.Page page(AnalysisResult result, ReportInputs inputs, List<RenderedChart> charts,
+                              ReportDetail detail) {
         Map<String, RenderedChart> byName = new HashMap<>();
         for (RenderedChart c : charts) {
             byName.put(c.baseName(), c);
@@ -88,7 +103,10 @@ public final class HtmlReport {
         List<HtmlView.Position> positions = new ArrayList<>();
         for (int i = 0; i < result.positions().size(); i++) {
             HtmlPositionView v = new HtmlPositionView(result, i, stems.get(i));
-            summary.add(v.summaryRow());
+            summary.add(v.summaryRow(detail.isDetailed(i)));
+            if (!detail.isDetailed(i)) {
+                continue;
+            }
             List<HtmlView.Chart> inline = new ArrayList<>();
             for (ChartKind kind : ChartSet.kindsFor(result, i)) {
                 RenderedChart c = byName.get(ChartNames.baseName(stems.get(i), kind));
@@ -103,7 +121,12 @@ public final class HtmlReport {
         String designMax = HtmlFormat.temperature(result.atMaximumAmbient().ambientK());
         return new HtmlView.Page(result.board().name(), inputs.toolVersion(),
                 HtmlPositionView.badge(result.verdict()), verdictText(result), designFacts(result), summary,
-                designMax, positions, policy(result), inputs.cautions(), files, colours());
+                designMax, emptyToNull(detail.note("in the table above (without a section), in results.json and at "
+                        + "every ambient in sweep.csv")), positions, policy(result), inputs.cautions(), files, colours());
+    }
+
+    private static String emptyToNull(String s) {
+        return s.isEmpty() ? null : s;
     }
 
     /** The SVG for inline use: without its namespace declarations, which HTML does not need. */
