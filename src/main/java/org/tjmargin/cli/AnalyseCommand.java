@@ -16,10 +16,12 @@ import org.tjmargin.design.LoadedPolicy;
 import org.tjmargin.design.ProfileLoader;
 import org.tjmargin.report.Cautions;
 import org.tjmargin.report.ChartSet;
+import org.tjmargin.report.ChartSize;
 import org.tjmargin.report.HtmlReport;
 import org.tjmargin.report.OutputFiles;
 import org.tjmargin.report.RenderedChart;
 import org.tjmargin.report.RenderingWarmUp;
+import org.tjmargin.report.ReportDetail;
 import org.tjmargin.report.ReportInputs;
 import org.tjmargin.report.ResultsJson;
 import org.tjmargin.report.StatisticsCsv;
@@ -79,6 +81,14 @@ public final class AnalyseCommand implements Callable<Integer> {
     @Option(names = "--no-statistics", description = "skip the statistics even where the design asks for them")
     boolean noStatistics;
 
+    @Option(names = "--detail", paramLabel = "N", defaultValue = "" + ReportDetail.DEFAULT_LIMIT,
+            description = {"detail the N positions of least margin, failing, runaway and unresolved ones first: their "
+                + "rows in the table printed here, their sections and charts in report.html, every rule at every "
+                + "ambient and every corner in results.json (default: ${DEFAULT-VALUE}; 0 for none).",
+                "Every position stays in report.html's verdict table, in results.json (verdict, margin, maximum "
+                    + "ambient, the hottest and least-current corner at every ambient) and in sweep.csv."})
+    int detail;
+
     @Option(names = {"-q", "--quiet"}, description = "no progress bar (it is shown only on an interactive console "
         + "and only for runs longer than about a second)")
     boolean quiet;
@@ -109,6 +119,11 @@ public final class AnalyseCommand implements Callable<Integer> {
         } catch (InputException e) {
             return invalid(err, e);
         }
+        if (detail < 0) {
+            err.println("--detail: expected a whole number of positions, 0 or more, got " + detail
+                    + "; nothing written");
+            return ExitCodes.INVALID_INPUT;
+        }
         if (samples != null && (samples < 1 || samples > 1_000_000_000L)) {
             err.println("--samples: expected a whole number from 1 to 1000000000, got " + samples + "; nothing written");
             return ExitCodes.INVALID_INPUT;
@@ -120,6 +135,7 @@ public final class AnalyseCommand implements Callable<Integer> {
         List<String> cautions;
         String resultsJson;
         List<RenderedChart> charts;
+        ReportDetail detailed;
         // The bar stays up until every file is written and is cleared before the table is printed.
         try (ProgressBar progress = ProgressBar.start(err, !quiet && System.console() != null)) {
             progress.phase("corner analysis");
@@ -135,12 +151,13 @@ public final class AnalyseCommand implements Callable<Integer> {
             allInputs.addAll(loadedPolicy.inputs());
             ReportInputs provenance = new ReportInputs(VersionProvider.version(), cautions, allInputs.stream()
                     .map(f -> new ReportInputs.InputDigest(f.path().toString(), f.sha256())).toList());
-            resultsJson = ResultsJson.render(result, stats, provenance);
-            charts = ChartSet.render(result, stats);
+            detailed = ReportDetail.leastMargin(result, detail);
+            resultsJson = ResultsJson.render(result, stats, provenance, detailed);
+            charts = ChartSet.render(result, stats, ChartSize.DEFAULT, detailed);
             OutputFiles files = new OutputFiles()
                     .text("results.json", resultsJson)
                     .text("sweep.csv", SweepCsv.render(result))
-                    .text("report.html", HtmlReport.render(result, stats, provenance, charts));
+                    .text("report.html", HtmlReport.render(result, stats, provenance, charts, detailed));
             if (stats.isPresent()) {
                 files.text("spread.csv", StatisticsCsv.spread(stats.get()))
                         .text("yield.csv", StatisticsCsv.yield(stats.get()))
@@ -166,7 +183,7 @@ public final class AnalyseCommand implements Callable<Integer> {
         if (json) {
             stdout.print(resultsJson);
         } else {
-            stdout.print(SummaryTable.render(result, stats, cautions));
+            stdout.print(SummaryTable.render(result, stats, cautions, detailed));
             stdout.println("written into " + out + ": results.json, sweep.csv, "
                     + (stats.isPresent() ? "spread.csv, yield.csv, sensitivity.csv, " : "") + "report.html and "
                     + charts.size() + " charts (PNG and SVG)");

@@ -28,6 +28,9 @@ public final class Cautions {
      * verify). */
     public static final double HIGH_VOLTAGE_V = 60.0;
 
+    /** Positions a caution names before it counts the rest (the report's table and results.json list them all). */
+    static final int LISTED_IDS = 12;
+
     private Cautions() {
     }
 
@@ -57,7 +60,7 @@ public final class Cautions {
             }
         }
         if (!hot.isEmpty()) {
-            out.add("Hot surface: at the highest ambient the junction of " + String.join(", ", hot) + " runs above "
+            out.add("Hot surface: at the highest ambient the junction of " + Labels.ids(hot, LISTED_IDS) + " runs above "
                     + (int) HOT_SURFACE_C + " °C. The part's body and leads get nearly as hot: they can burn skin "
                     + "and char or discolour the board. Keep them clear of touchable surfaces, plastics and cables, "
                     + "and apply the touch-temperature limits of the product standard.");
@@ -83,7 +86,7 @@ public final class Cautions {
         }
         List<String> surged = r.board().positions().stream().filter(s -> s.surges().isPresent()).map(PositionSpec::id).toList();
         if (!surged.isEmpty()) {
-            out.add("Surges (" + String.join(", ", surged) + "): " + org.tjmargin.surge.SurgeResult.THERMAL_MODEL_CAUTION);
+            out.add("Surges (" + Labels.ids(surged, LISTED_IDS) + "): " + org.tjmargin.surge.SurgeResult.THERMAL_MODEL_CAUTION);
         }
         if (highVoltage) {
             out.add("Mains or high-energy input: a supply or line of " + (int) HIGH_VOLTAGE_V + " V or more is in "

@@ -43,14 +43,21 @@ public final class ChartSet {
     /** All charts of the analysis and of its statistics, when given, at {@code size}. */
     public static List<RenderedChart> render(AnalysisResult result, Optional<StatisticsResult> stats,
                                              ChartSize size) {
+        return render(result, stats, size, ReportDetail.all(result));
+    }
+
+    /** The charts of the detailed positions only, with their statistics when given, at {@code size}. */
+    public static List<RenderedChart> render(AnalysisResult result, Optional<StatisticsResult> stats,
+                                             ChartSize size, ReportDetail detail) {
         Objects.requireNonNull(result, "result");
         Objects.requireNonNull(stats, "stats");
         Objects.requireNonNull(size, "size");
+        Objects.requireNonNull(detail, "detail");
         List<String> stems = ChartNames.stems(result);
         record Task(int position, ChartKind kind) {
         }
         List<Task> tasks = new ArrayList<>();
-        for (int i = 0; i < result.positions().size(); i++) {
+        for (int i : detail.indices()) {
             for (ChartKind kind : kindsFor(result, stats, i)) {
                 tasks.add(new Task(i, kind));
             }

@@ -70,11 +70,11 @@ final class HtmlPositionView {
         return new HtmlView.Badge(v.name(), "verdict-" + v.name().toLowerCase(Locale.ROOT));
     }
 
-    HtmlView.SummaryRow summaryRow() {
+    HtmlView.SummaryRow summaryRow(boolean detailed) {
         Optional<OperatingPoint> hot = atMax.hottest().flatMap(CornerPoint::point);
         String hottestTj = hot.map(p -> HtmlFormat.temperature(p.tjK()))
                 .orElse(atMax.hottest().isPresent() ? statusWord(atMax.hottest().get()) : HtmlFormat.NONE);
-        return new HtmlView.SummaryRow(pr.id(), anchor, spec.part().id(), circuitKind(spec.circuit()),
+        return new HtmlView.SummaryRow(pr.id(), anchor, detailed, spec.part().id(), circuitKind(spec.circuit()),
                 badge(pr.verdict()), pr.limitingRuleId(), worstMargin(), maxAmbient(pr.maxAmbient()), hottestTj,
                 hot.map(p -> HtmlFormat.si(p.diodePowerW(), Dimension.POWER)).orElse(HtmlFormat.NONE),
                 outputRange(atMax),

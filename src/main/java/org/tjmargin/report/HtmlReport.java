@@ -74,7 +74,7 @@ public final class HtmlReport {
 
     /** Renders the report; see {@link #render(AnalysisResult, List, List, String, List)}. */
     public static String render(AnalysisResult result, ReportInputs inputs, List<RenderedChart> charts) {
-        return render(result, Optional.empty(), inputs, charts);
+        return render(result, Optional.empty(), inputs, charts, ReportDetail.all(result));
     }
 
     /**
@@ -85,12 +85,23 @@ public final class HtmlReport {
      */
     public static String render(AnalysisResult result, Optional<StatisticsResult> stats, ReportInputs inputs,
                                 List<RenderedChart> charts) {
+        return render(result, stats, inputs, charts, ReportDetail.all(result));
+    }
+
+    /**
+     * Renders the report, with its statistics when given, and a section for each detailed position only; every
+     * position keeps its row in the verdict table, and the page says which positions are detailed and where the
+     * others are.
+     */
+    public static String render(AnalysisResult result, Optional<StatisticsResult> stats, ReportInputs inputs,
+                                List<RenderedChart> charts, ReportDetail detail) {
         Objects.requireNonNull(result, "result");
         Objects.requireNonNull(stats, "stats");
         Objects.requireNonNull(inputs, "inputs");
+        Objects.requireNonNull(detail, "detail");
         StringWriter out = new StringWriter(256 * 1024);
         try {
-            Template.PAGE.execute(out, page(result, stats, inputs, charts)).flush();
+            Template.PAGE.execute(out, page(result, stats, inputs, charts, detail)).flush();
         } catch (IOException e) {
             // A StringWriter never fails; an IOException here comes from a broken template engine.
             throw new UncheckedIOException("rendering the HTML report failed", e);
@@ -99,11 +110,11 @@ public final class HtmlReport {
     }
 
     static HtmlView.Page page(AnalysisResult result, ReportInputs inputs, List<RenderedChart> charts) {
-        return page(result, Optional.empty(), inputs, charts);
+        return page(result, Optional.empty(), inputs, charts, ReportDetail.all(result));
     }
 
     static HtmlView.Page page(AnalysisResult result, Optional<StatisticsResult> stats, ReportInputs inputs,
-                              List<RenderedChart> charts) {
+                              List<RenderedChart> charts, ReportDetail detail) {
         Map<String, RenderedChart> byName = new HashMap<>();
         for (RenderedChart c : charts) {
             byName.put(c.baseName(), c);
@@ -114,7 +125,11 @@ public final class HtmlReport {
         List<String> anchors = new ArrayList<>();
         for (int i = 0; i < result.positions().size(); i++) {
             HtmlPositionView v = new HtmlPositionView(result, i, stems.get(i));
-            summary.add(v.summaryRow());
+            summary.add(v.summaryRow(detail.isDetailed(i)));
+            if (!detail.isDetailed(i)) {
+                anchors.add(null);
+                continue;
+            }
             List<HtmlView.Chart> inline = new ArrayList<>();
             for (ChartKind kind : ChartSet.kindsFor(result, i)) {
                 RenderedChart c = byName.get(ChartNames.baseName(stems.get(i), kind));
@@ -130,8 +145,13 @@ public final class HtmlReport {
         String designMax = HtmlFormat.temperature(result.atMaximumAmbient().ambientK());
         return new HtmlView.Page(result.board().name(), inputs.toolVersion(),
                 HtmlPositionView.badge(result.verdict()), verdictText(result), designFacts(result), summary,
-                designMax, positions, policy(result), inputs.cautions(), files, colours(),
+                designMax, emptyToNull(detail.note("in the table above (without a section), in results.json and at "
+                        + "every ambient in sweep.csv")), positions, policy(result), inputs.cautions(), files, colours(),
                 stats.flatMap(st -> HtmlStatisticsView.summary(result, st, anchors)).orElse(null));
+    }
+
+    private static String emptyToNull(String s) {
+        return s.isEmpty() ? null : s;
     }
 
     /** A position's statistical spread with its charts, or {@code null} when {@code stats} does not cover it. */

@@ -45,12 +45,16 @@ final class HtmlStatisticsView {
      * The statistics line of the verdict area: the position most likely to violate the policy at the design's
      * highest ambient (largest estimate, then largest upper bound), and each position's probability.
      *
-     * @param anchors each position's section anchor, in board order
+     * <p>Only positions with a section get a line; the others are counted in the text (their probabilities are in
+     * results.json and spread.csv), so a board of a thousand positions does not list a thousand lines.
+     *
+     * @param anchors each position's section anchor, in board order; {@code null} for a position without a section
      */
     static Optional<HtmlView.StatisticsSummary> summary(AnalysisResult result, StatisticsResult stats,
                                                         List<String> anchors) {
         List<HtmlView.StatisticsLine> lines = new ArrayList<>();
         PositionStatistics worst = null;
+        int unlisted = 0;
         Comparator<PositionStatistics> byRisk = Comparator.comparingDouble(
                 (PositionStatistics p) -> p.monteCarlo().violation().estimate())
                 .thenComparingDouble(p -> p.monteCarlo().violation().upper());
@@ -61,13 +65,17 @@ final class HtmlStatisticsView {
             }
             PositionStatistics p = ps.get();
             MonteCarloResult mc = p.monteCarlo();
+            if (worst == null || byRisk.compare(p, worst) > 0) {
+                worst = p;
+            }
+            if (anchors.get(i) == null) {
+                unlisted++;
+                continue;
+            }
             lines.add(new HtmlView.StatisticsLine(p.positionId(), anchor(anchors.get(i)),
                     StatisticsFormat.withInterval(mc.violation()) + " of " + mc.violation().trials() + " samples"
                             + (p.surgesIncluded() ? " with surges" : "") + "; limiting margin "
                             + meanAndSigma(mc.margin(), false) + "."));
-            if (worst == null || byRisk.compare(p, worst) > 0) {
-                worst = p;
-            }
         }
         if (worst == null) {
             return Optional.empty();
@@ -80,6 +88,11 @@ final class HtmlStatisticsView {
                         + worst.positionId() + "'s, " + StatisticsFormat.probability(w.upper()) + "."
                 : "Probability of violating the policy" + run + ": highest at " + worst.positionId() + ", "
                         + StatisticsFormat.withInterval(w) + ".";
+        if (unlisted > 0) {
+            text += " " + unlisted + " position" + (unlisted == 1 ? "" : "s") + " without a section below: "
+                    + (unlisted == 1 ? "its probability is" : "their probabilities are")
+                    + " in results.json and spread.csv.";
+        }
         return Optional.of(new HtmlView.StatisticsSummary(text, lines));
     }
 

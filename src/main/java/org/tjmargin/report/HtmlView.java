@@ -18,8 +18,9 @@ final class HtmlView {
 
     /** The whole page. */
     record Page(String designName, String toolVersion, Badge verdict, String verdictText, List<Fact> design,
-                List<SummaryRow> summary, String summaryAmbient, List<Position> positions, Policy policy,
-                List<String> cautions, List<Input> inputs, List<Fact> colours, StatisticsSummary statisticsSummary) {
+                List<SummaryRow> summary, String summaryAmbient, String detailNote, List<Position> positions,
+                Policy policy, List<String> cautions, List<Input> inputs, List<Fact> colours,
+                StatisticsSummary statisticsSummary) {
 
         /** True when there is a caution to print. */
         boolean hasCautions() {
@@ -35,10 +36,10 @@ final class HtmlView {
     record Badge(String word, String cssClass) {
     }
 
-    /** One row of the verdict table. */
-    record SummaryRow(String id, String anchor, String part, String circuit, Badge verdict, String limitingRule,
-                      String worstMargin, String maxAmbient, String hottestTj, String diodePower, String output,
-                      String leastCurrent) {
+    /** One row of the verdict table; {@code detailed} when the position has a section to link to. */
+    record SummaryRow(String id, String anchor, boolean detailed, String part, String circuit, Badge verdict,
+                      String limitingRule, String worstMargin, String maxAmbient, String hottestTj, String diodePower,
+                      String output, String leastCurrent) {
     }
 
     /** One position's section. */

@@ -63,4 +63,15 @@ public final class Labels {
             case TEMPERATURE_COEFFICIENT -> "temperature coefficient";
         };
     }
+
+    /**
+     * Identifiers as a list for a sentence: all of them up to {@code shown}, else the first {@code shown} and a count
+     * of the rest ("D1, D2, D3 and 997 more").
+     */
+    public static String ids(java.util.List<String> ids, int shown) {
+        if (ids.size() <= shown) {
+            return String.join(", ", ids);
+        }
+        return String.join(", ", ids.subList(0, shown)) + " and " + (ids.size() - shown) + " more";
+    }
 }

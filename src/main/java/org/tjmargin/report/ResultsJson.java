@@ -58,10 +58,24 @@ public final class ResultsJson {
      * with the run's budget, and a {@code statistics} object in every position ({@code null} without).
      */
     public static String render(AnalysisResult r, Optional<StatisticsResult> stats, ReportInputs provenance) {
+        return render(r, stats, provenance, ReportDetail.all(r));
+    }
+
+    /**
+     * As above, with the every-ambient {@code points} and {@code cornersAtMaxAmbient} only for the detailed positions
+     * ({@code "detailed": true}). Every other position keeps its summary (verdict, limiting rule, worst margin,
+     * maximum ambient, runaway onset, regulation, notes, surges) and {@code atMaxAmbient}, its hottest and
+     * least-current corners at the design's highest ambient with the quantities of design 2.3;
+     * {@code "pointsIn": "sweep.csv"} says where its every ambient is. On a board of a thousand positions and a
+     * hundred ambients the points of all would make the file about 150 MB (sweep.csv holds the same corners in a
+     * third of that). A top-level {@code detail} object says how many were detailed and how they were chosen.
+     */
+    public static String render(AnalysisResult r, Optional<StatisticsResult> stats, ReportInputs provenance,
+                                ReportDetail detail) {
         StringWriter text = new StringWriter(1 << 20);
         try (JsonGenerator g = JSON.createGenerator(text)) {
             g.useDefaultPrettyPrinter();
-            write(g, tree(r, stats, provenance));
+            write(g, tree(r, stats, provenance, detail));
         } catch (IOException e) {
             // A StringWriter does not fail; an IOException here is a broken generator.
             throw new UncheckedIOException("results could not be rendered as JSON", e);
@@ -71,11 +85,12 @@ public final class ResultsJson {
 
     /** The whole result as a tree, before it is written. */
     static ObjectNode tree(AnalysisResult r, ReportInputs provenance) {
-        return tree(r, Optional.empty(), provenance);
+        return tree(r, Optional.empty(), provenance, ReportDetail.all(r));
     }
 
-    /** The whole result with its statistics as a tree, before it is written. */
-    static ObjectNode tree(AnalysisResult r, Optional<StatisticsResult> stats, ReportInputs provenance) {
+    /** The whole result with its statistics as a tree, before it is written; see {@link #render}. */
+    static ObjectNode tree(AnalysisResult r, Optional<StatisticsResult> stats, ReportInputs provenance,
+                           ReportDetail detail) {
         ObjectNode root = NODES.objectNode();
         root.putObject("tool").put("name", "tjmargin").put("version", provenance.toolVersion());
         root.put("design", r.board().name());
@@ -98,9 +113,13 @@ public final class ResultsJson {
         } else {
             root.putNull("statistics");
         }
+        root.putObject("detail").put("detailedPositions", detail.count()).put("limit", detail.limit())
+                .put("positions", r.positions().size())
+                .put("selection", "least margin, failing, runaway and unresolved first")
+                .put("others", "summary and atMaxAmbient here; every ambient in sweep.csv");
         ArrayNode positions = root.putArray("positions");
         for (int i = 0; i < r.positions().size(); i++) {
-            ObjectNode p = position(r, i);
+            ObjectNode p = position(r, i, detail.isDetailed(i));
             PositionSpec spec = r.board().positions().get(i);
             Optional<PositionStatistics> ps = stats.flatMap(st -> st.of(spec.id()));
             if (ps.isPresent()) {
@@ -152,11 +171,12 @@ public final class ResultsJson {
         }
     }
 
-    private static ObjectNode position(AnalysisResult r, int i) {
+    private static ObjectNode position(AnalysisResult r, int i, boolean detailed) {
         PositionResult pr = r.positions().get(i);
         PositionSpec spec = r.board().positions().get(i);
         ObjectNode o = NODES.objectNode();
         o.put("id", pr.id());
+        o.put("detailed", detailed);
         o.put("part", spec.part().id());
         o.put("circuit", Labels.circuitKind(spec.circuit()));
         o.put("verdict", pr.verdict().name());
@@ -183,6 +203,21 @@ public final class ResultsJson {
                 .put("tLocalC", Labels.celsius(reg.tLocalK())), () -> o.putNull("regulation"));
         ArrayNode notes = o.putArray("notes");
         pr.notes().forEach(notes::add);
+        if (!detailed) {
+            // Every ambient of this position is in sweep.csv; here the highest ambient's two reported corners.
+            PositionAtAmbient top = r.atMaximumAmbient().positions().get(i);
+            ObjectNode at = o.putObject("atMaxAmbient");
+            at.put("ambientC", Labels.celsius(top.ambientK()));
+            at.put("tLocalC", Labels.celsius(top.tLocalK()));
+            at.put("status", top.status().name());
+            at.put("margin", top.margin());
+            at.put("limitingRule", top.limitingRuleId());
+            top.hottest().ifPresent(c -> at.set("hottest", corner(c)));
+            top.leastCurrent().ifPresent(c -> at.set("leastCurrent", corner(c)));
+            o.put("pointsIn", "sweep.csv");
+            o.set("surges", surges(r, i));
+            return o;
+        }
         ArrayNode points = o.putArray("points");
         for (BoardAtAmbient b : r.sweep()) {
             PositionAtAmbient p = b.positions().get(i);

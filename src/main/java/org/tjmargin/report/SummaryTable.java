@@ -1,14 +1,18 @@
 package org.tjmargin.report;
 
 import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import org.tjmargin.solve.AnalysisResult;
 import org.tjmargin.solve.OperatingPoint;
 import org.tjmargin.solve.PositionAtAmbient;
 import org.tjmargin.solve.PositionResult;
 import org.tjmargin.solve.PositionSpec;
+import org.tjmargin.solve.Verdict;
 import org.tjmargin.units.Dimension;
 import org.tjmargin.units.Quantities;
 import org.tjmargin.variation.statistical.MonteCarloResult;
@@ -19,7 +23,8 @@ import org.tjmargin.variation.statistical.StatisticsResult;
 /**
  * The terminal summary: one row per position with its verdict, the hottest corner at the design's highest ambient
  * (junction temperature, diode power, output voltage), the least diode current anywhere in the sweep, the maximum
- * ambient and the limiting rule; then notes on estimated values and the cautions.
+ * ambient and the limiting rule; then notes on estimated values and the cautions. On a large board only the
+ * detailed positions ({@link ReportDetail}) get rows; one line counts the rest.
  */
 public final class SummaryTable {
 
@@ -36,9 +41,19 @@ public final class SummaryTable {
 
     /** As above, with a statistics table after the corner table when there are statistics. */
     public static String render(AnalysisResult r, Optional<StatisticsResult> stats, List<String> cautions) {
+        return render(r, stats, cautions, ReportDetail.all(r));
+    }
+
+    /**
+     * As above, with rows for the detailed positions only (in board order) and one line counting the others by
+     * verdict with their least margin, so that a board of a thousand positions still reads on a terminal. Notes that
+     * several positions share are printed once, with the first few identifiers and a count.
+     */
+    public static String render(AnalysisResult r, Optional<StatisticsResult> stats, List<String> cautions,
+                                ReportDetail detail) {
         List<String[]> rows = new ArrayList<>();
         rows.add(HEADER);
-        for (int i = 0; i < r.positions().size(); i++) {
+        for (int i : detail.indices()) {
             rows.add(row(r, i));
         }
         StringBuilder sb = new StringBuilder();
@@ -47,16 +62,39 @@ public final class SummaryTable {
                         Labels.celsius(r.board().ambient().maxK())))
                 .append(", design verdict ").append(r.verdict()).append('\n');
         table(sb, rows);
+        if (detail.omitted() > 0) {
+            sb.append(omitted(r, detail)).append('\n');
+        }
         sb.append("(Tj hot, P diode, Vout: hottest corner at the highest ambient; min Iz: least diode current over the "
                 + "sweep)\n");
         stats.ifPresent(st -> statistics(sb, st));
+        Map<String, List<String>> notes = new LinkedHashMap<>();
         for (PositionResult pr : r.positions()) {
             for (String n : pr.notes()) {
-                sb.append("note ").append(pr.id()).append(": ").append(n).append('\n');
+                notes.computeIfAbsent(n, k -> new ArrayList<>()).add(pr.id());
             }
-            pr.runaway().ifPresent(o -> sb.append("note ").append(pr.id()).append(": thermal runaway begins ")
+        }
+        for (Map.Entry<String, List<String>> n : notes.entrySet()) {
+            sb.append("note ").append(Labels.ids(n.getValue(), NOTE_IDS)).append(": ").append(n.getKey()).append('\n');
+        }
+        int runawayOmitted = 0;
+        for (int i = 0; i < r.positions().size(); i++) {
+            PositionResult pr = r.positions().get(i);
+            if (pr.runaway().isEmpty()) {
+                continue;
+            }
+            if (!detail.isDetailed(i)) {
+                runawayOmitted++;
+                continue;
+            }
+            var o = pr.runaway().get();
+            sb.append("note ").append(pr.id()).append(": thermal runaway begins ")
                     .append(o.atOrBelowSearch() ? "at or below " : "at ")
-                    .append(String.format(Locale.ROOT, "%.1f °C ambient", Labels.celsius(o.ambientK()))).append('\n'));
+                    .append(String.format(Locale.ROOT, "%.1f °C ambient", Labels.celsius(o.ambientK()))).append('\n');
+        }
+        if (runawayOmitted > 0) {
+            sb.append("note: thermal runaway begins within or near the range for ").append(runawayOmitted)
+                    .append(" positions not listed above (onsets in report.html and results.json)\n");
         }
         for (String c : cautions) {
             sb.append("CAUTION: ").append(c).append('\n');
@@ -96,6 +134,36 @@ public final class SummaryTable {
                 + "and histograms in the report):", Labels.celsius(ambient), st.plan().settings().seed()))
                 .append('\n');
         table(sb, rows);
+    }
+
+    /** Identifiers printed with a shared note before the rest are counted. */
+    static final int NOTE_IDS = 5;
+
+    /** The line that stands for the positions not listed: how many, by verdict, and the least margin among them. */
+    private static String omitted(AnalysisResult r, ReportDetail detail) {
+        Map<Verdict, Integer> byVerdict = new EnumMap<>(Verdict.class);
+        double least = Double.POSITIVE_INFINITY;
+        String leastId = "";
+        for (int i = 0; i < r.positions().size(); i++) {
+            if (detail.isDetailed(i)) {
+                continue;
+            }
+            PositionResult pr = r.positions().get(i);
+            byVerdict.merge(pr.verdict(), 1, Integer::sum);
+            if (pr.worstMargin() < least) {
+                least = pr.worstMargin();
+                leastId = pr.id();
+            }
+        }
+        List<String> parts = new ArrayList<>();
+        for (Verdict v : Verdict.values()) {
+            if (byVerdict.containsKey(v)) {
+                parts.add(byVerdict.get(v) + " " + v.name());
+            }
+        }
+        return String.format(Locale.ROOT, "… and %d more positions (%s; least margin %.1f %%, %s), every one in "
+                + "report.html, results.json and sweep.csv; --detail N lists more", detail.omitted(),
+                String.join(", ", parts), 100 * least, leastId);
     }
 
     private static void table(StringBuilder sb, List<String[]> rows) {

@@ -7,6 +7,10 @@ import org.tjmargin.derating.Policy;
 /**
  * A whole analysis: the board swept over its ambient range, each position judged at every corner, its maximum
  * ambient, runaway onset and regulation. A pure function of its inputs.
+ *
+ * <p>Cost grows linearly with the number of positions: a board in a sealed box is swept by continuation
+ * ({@link CoupledSweep}, every corner solved about once per ambient), and each position's searches read the local
+ * air from the board's shared {@link AirMap} and solve only that position's corners at each probe.
  */
 public final class Analysis {
 
@@ -22,12 +26,25 @@ public final class Analysis {
      */
     public static AnalysisResult run(Board board, Policy policy, SolverSettings settings) {
         PreparedBoard prepared = PreparedBoard.of(board);
-        // Every ambient is an independent pure solve, and so is every position's search below: they run on all
-        // cores, and the ordered streams make the result identical whatever the number of threads.
-        List<BoardAtAmbient> sweep = java.util.Arrays.stream(board.ambient().temperaturesK()).parallel()
-                .mapToObj(t -> BoardSolver.solveAt(prepared, policy, t, settings)).toList();
-        List<PositionResult> results = java.util.stream.IntStream.range(0, board.positions().size()).parallel()
-                .mapToObj(i -> positionResult(prepared, policy, sweep, i, settings)).toList();
+        List<BoardAtAmbient> sweep;
+        AirMap map;
+        if (board.enclosure().couplesPositions()) {
+            CoupledSweep.Result r = CoupledSweep.run(prepared, policy, settings);
+            sweep = r.sweep();
+            map = AirMap.of(prepared, settings, r);
+        } else {
+            // Without coupling every ambient is an independent pure solve: they run on all cores.
+            sweep = java.util.Arrays.stream(board.ambient().temperaturesK()).parallel()
+                    .mapToObj(t -> BoardSolver.solveAt(prepared, policy, t, settings)).toList();
+            map = AirMap.fixed(prepared, settings, sweep);
+        }
+        // Every position's search is a pure function of the sweep and the map (whose answers do not depend on the
+        // order of the questions): they run on all cores, and the ordered stream keeps board order.
+        List<PositionResult> results;
+        try (map) {
+            results = java.util.stream.IntStream.range(0, board.positions().size()).parallel()
+                    .mapToObj(i -> positionResult(prepared, policy, sweep, map, i, settings)).toList();
+        }
         Verdict overall = Verdict.PASS;
         for (PositionResult r : results) {
             overall = overall.worse(r.verdict());
@@ -36,7 +53,7 @@ public final class Analysis {
     }
 
     private static PositionResult positionResult(PreparedBoard prepared, Policy policy, List<BoardAtAmbient> sweep,
-                                                 int i, SolverSettings settings) {
+                                                 AirMap map, int i, SolverSettings settings) {
         Board board = prepared.board();
         {
             PositionSpec spec = board.positions().get(i);
@@ -57,8 +74,8 @@ public final class Analysis {
                     limiting = p.limitingRuleId();
                 }
             }
-            MaximumAmbient max = MaximumAmbientSearch.find(prepared, policy, i, sweep, settings);
-            RunawayOnset onset = RunawayOnset.find(prepared, policy, i, sweep, settings);
+            MaximumAmbient max = MaximumAmbientSearch.find(prepared, policy, i, sweep, settings, map);
+            RunawayOnset onset = RunawayOnset.find(prepared, policy, i, sweep, settings, map);
             BoardAtAmbient hottest = sweep.get(sweep.size() - 1);
             Optional<Regulation> reg = Regulation.of(spec, hottest.positions().get(i).tLocalK(), settings);
             return new PositionResult(spec.id(), v, limiting, worst, worstT, max, Optional.ofNullable(onset), reg,

@@ -121,8 +121,8 @@ public final class BoardSolver {
         return evaluate(spec, instances, policy, ambientK, tLocalK, settings, null);
     }
 
-    /** As above, reusing the corners' outcomes in this air when the air balance already solved them. */
-    private static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
+    /** As above, reusing the corners' outcomes in this air when the air balance already solved them (null: solve). */
+    static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
                                               double ambientK, double tLocalK, SolverSettings settings,
                                               List<ThermalOutcome> solved) {
         List<CornerPoint> corners = new ArrayList<>(instances.size());
@@ -185,7 +185,7 @@ public final class BoardSolver {
                     worst.put(rc.ruleId(), new WorstCheck(rc, k));
                 }
             }
-            corners.add(new CornerPoint(inst.corner(), out, allowed, resistorAllowed, checks, surges));
+            corners.add(new CornerPoint(inst.corner(), out, allowed, resistorAllowed, surges));
         }
         double margin = 1.0;
         String limiting = "none";
@@ -209,7 +209,7 @@ public final class BoardSolver {
             for (PositionInstance inst : insts) {
                 ThermalOutcome out = inst.solve(tLocalK, settings);
                 outs.add(out);
-                max = Math.max(max, heatOf(inst, out, settings));
+                max = Math.max(max, CornerHeat.of(inst, out, settings));
             }
             all.add(outs);
             sum += max;
@@ -222,18 +222,8 @@ public final class BoardSolver {
     private static double maxHeatW(PositionAtAmbient p, List<PositionInstance> insts, SolverSettings settings) {
         double max = 0;
         for (int k = 0; k < insts.size(); k++) {
-            max = Math.max(max, heatOf(insts.get(k), p.corners().get(k).outcome(), settings));
+            max = Math.max(max, CornerHeat.of(insts.get(k), p.corners().get(k).outcome(), settings));
         }
         return max;
-    }
-
-    /** Heat a corner puts into the air; a runaway corner is taken at the search cap, the worst it can be. */
-    private static double heatOf(PositionInstance inst, ThermalOutcome out, SolverSettings settings) {
-        if (out instanceof ThermalOutcome.Converged c) {
-            return c.point().heatW();
-        }
-        double tj = out instanceof ThermalOutcome.NotConverged n ? n.lastTjK() : settings.capK();
-        var cp = inst.circuit().at(inst.diode(), tj);
-        return cp.diodePowerW() + cp.resistorPowerW();
     }
 }

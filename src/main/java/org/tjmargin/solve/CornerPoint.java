@@ -2,32 +2,26 @@ package org.tjmargin.solve;
 
 import java.util.List;
 import java.util.Optional;
-import org.tjmargin.derating.RuleCheck;
 import org.tjmargin.surge.SurgeResult;
 import org.tjmargin.variation.Corner;
 
 /**
- * One corner of one position at one ambient: the solve's outcome and the rules held against it.
+ * One corner of one position at one ambient: the solve's outcome and the ratings it was held against. The rules'
+ * results are kept per rule at its worst corner ({@link PositionAtAmbient#worst()}), not per corner: a board of a
+ * thousand positions swept over a hundred ambients has millions of corners, and a check for every rule at each
+ * of them would hold about a gigabyte that no output reads.
  *
  * @param corner          the corner
  * @param outcome         converged, runaway or not converged
  * @param allowedPowerW   the device rating read at the reference point's temperature (W); 0 when not converged
  * @param resistorAllowedW the series resistor's derated rating at the local air (W); 0 without a resistor
- * @param checks          the policy's applicable rules at this corner
  * @param surges          each of the position's surges started from this corner's steady state, in the design's
  *                        order; empty without surges or without a converged point
  */
 public record CornerPoint(Corner corner, ThermalOutcome outcome, double allowedPowerW, double resistorAllowedW,
-                          List<RuleCheck> checks, List<SurgeResult> surges) {
-
-    /** A corner without surges. */
-    public CornerPoint(Corner corner, ThermalOutcome outcome, double allowedPowerW, double resistorAllowedW,
-                       List<RuleCheck> checks) {
-        this(corner, outcome, allowedPowerW, resistorAllowedW, checks, List.of());
-    }
+                          List<SurgeResult> surges) {
 
     public CornerPoint {
-        checks = List.copyOf(checks);
         surges = List.copyOf(surges);
     }
 

@@ -17,6 +17,15 @@ import org.tjmargin.derating.Policy;
  * ≥ 0, so the reported ambient always passes. When the sweep passes throughout, the search steps on above the
  * sweep (in sweep steps, at least 5 K) up to the part's Tj max, above which no junction can be cooler than its air;
  * when it fails throughout, it steps down by the same steps for at most 200 K.
+ *
+ * <p>Two ways to read the margin at a probed ambient. The reference ({@link #find(PreparedBoard, Policy, int, List,
+ * SolverSettings)}) solves the whole board's air balance again at every probe ({@link BoardSolver#positionAt}):
+ * exact, but each probe costs the whole board, so the searches of all positions cost the square of their number.
+ * The analysis ({@link #find(PreparedBoard, Policy, int, List, SolverSettings, AirMap)}) reads the local air from
+ * the board's shared {@link AirMap} and solves only the position's own corners there: the margin is then the exact
+ * margin at an ambient within {@link AirMap#TOLERANCE_K} of the probed one, and the refinement runs to
+ * {@code TOLERANCE_K − AirMap.TOLERANCE_K} so that the reported ambient stays within {@link #TOLERANCE_K} of the
+ * limit.
  */
 public final class MaximumAmbientSearch {
 
@@ -24,14 +33,15 @@ public final class MaximumAmbientSearch {
     public static final double TOLERANCE_K = 0.1;
     /** Evaluation budget of the refinement: a 5 K bracket needs about 6 bisections, Brent steps need fewer. */
     private static final int MAX_EVALUATIONS = 60;
-    private static final double MIN_STEP_K = 5.0;
+    /** Shortest step of the searches beyond the sweep (K). */
+    static final double MIN_STEP_K = 5.0;
     private static final double DOWNWARD_SPAN_K = 200.0;
 
     private MaximumAmbientSearch() {
     }
 
     /**
-     * Searches one position.
+     * Searches one position with exact board solves at every probe (the reference; cost grows with the board).
      *
      * @param board    the prepared board
      * @param policy   the policy
@@ -41,7 +51,22 @@ public final class MaximumAmbientSearch {
      */
     public static MaximumAmbient find(PreparedBoard board, Policy policy, int index, List<BoardAtAmbient> sweep,
                                       SolverSettings settings) {
-        DoubleUnaryOperator margin = t -> marginAt(board, policy, index, t, settings);
+        return find(board, index, sweep, t -> marginAt(board, policy, index, t, settings), TOLERANCE_K);
+    }
+
+    /**
+     * Searches one position on the board's air map: each probe solves only this position's corners.
+     *
+     * @param air the board's air map, built from {@code sweep}
+     */
+    static MaximumAmbient find(PreparedBoard board, Policy policy, int index, List<BoardAtAmbient> sweep,
+                               SolverSettings settings, AirMap air) {
+        return find(board, index, sweep, t -> marginAt(board, policy, index, t, settings, air),
+                TOLERANCE_K - AirMap.TOLERANCE_K);
+    }
+
+    private static MaximumAmbient find(PreparedBoard board, int index, List<BoardAtAmbient> sweep,
+                                       DoubleUnaryOperator margin, double tolerance) {
         double step = Math.max(MIN_STEP_K, board.board().ambient().stepK());
         double tjMax = board.board().positions().get(index).part().ratings().tjMaxK();
         int n = sweep.size();
@@ -83,11 +108,11 @@ public final class MaximumAmbientSearch {
                 }
             }
         }
-        return new MaximumAmbient(MaximumAmbient.Status.FOUND, refine(margin, passT, failT));
+        return new MaximumAmbient(MaximumAmbient.Status.FOUND, refine(margin, passT, failT, tolerance));
     }
 
-    private static double refine(DoubleUnaryOperator margin, double passT, double failT) {
-        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-12, TOLERANCE_K, 1e-12, 3);
+    private static double refine(DoubleUnaryOperator margin, double passT, double failT, double tolerance) {
+        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-12, tolerance, 1e-12, 3);
         try {
             double t = solver.solve(MAX_EVALUATIONS, margin::applyAsDouble, passT, failT, AllowedSolution.ABOVE_SIDE);
             return margin.applyAsDouble(t) >= 0 ? t : passT;
@@ -103,6 +128,24 @@ public final class MaximumAmbientSearch {
     /** The position's margin at one ambient; runaway and unresolved points count as failing. */
     static double marginAt(PreparedBoard board, Policy policy, int index, double ambientK, SolverSettings settings) {
         PositionAtAmbient p = BoardSolver.positionAt(board, policy, ambientK, settings, index);
+        if (p.status() != PointStatus.CONVERGED) {
+            return Math.min(p.margin(), -1.0);
+        }
+        return p.margin();
+    }
+
+    /**
+     * The position's margin at one ambient with its local air read from the board's air map; failing (−1) where the
+     * air finds no balance, like runaway and unresolved points.
+     */
+    static double marginAt(PreparedBoard board, Policy policy, int index, double ambientK, SolverSettings settings,
+                           AirMap air) {
+        AirMap.LocalAir local = air.at(ambientK);
+        if (local.status() != PointStatus.CONVERGED) {
+            return -1.0;
+        }
+        PositionAtAmbient p = BoardSolver.evaluate(board.board().positions().get(index), board.instances().get(index),
+                policy, ambientK, local.tLocalK(), settings);
         if (p.status() != PointStatus.CONVERGED) {
             return Math.min(p.margin(), -1.0);
         }
