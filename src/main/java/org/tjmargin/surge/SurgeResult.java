@@ -86,6 +86,12 @@ public record SurgeResult(String caseId, double startTjK, ClampTransientResult p
 
     /** True when any of {@code surges} {@linkplain #stoppedNumerically() stopped numerically}. */
     public static boolean anyStoppedNumerically(java.util.List<SurgeResult> surges) {
-        return surges.stream().anyMatch(SurgeResult::stoppedNumerically);
+        // A loop, not a stream: this runs for every corner at every ambient, most often on an empty list.
+        for (SurgeResult r : surges) {
+            if (r.stoppedNumerically()) {
+                return true;
+            }
+        }
+        return false;
     }
 }
