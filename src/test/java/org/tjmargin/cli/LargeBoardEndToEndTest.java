@@ -228,4 +228,44 @@ class LargeBoardEndToEndTest {
                 "title, header, rule and one row per detailed position before the count of the rest");
         assertEquals(25, ReportDetail.DEFAULT_LIMIT, "DEVELOPERS.md and the help text quote this default");
     }
+    /**
+     * Item 6 of the large-board work: a board of 1,000 positions in one sealed box with a 100-point sweep, through the
+     * command line with its defaults. Every position is in results.json and in sweep.csv at every ambient, the detail
+     * default holds, and the exit status is the design's verdict (design 4). Its speed is measured by
+     * {@code org.tjmargin.bench.LargeBoardScaling}, never here.
+     */
+    @Test
+    void aThousandPositionsEndToEnd() throws IOException {
+        int n = 1000;
+        Path big = LargeBoardGenerator.write(n, 1, LargeBoardGenerator.demoParts(), tmp.resolve("board-1000.yaml"));
+        Path out = tmp.resolve("out-1000");
+        CommandLine cl = Main.commandLine();
+        StringWriter stdout = new StringWriter();
+        StringWriter stderr = new StringWriter();
+        cl.setOut(new PrintWriter(stdout));
+        cl.setErr(new PrintWriter(stderr));
+        int status = cl.execute("analyse", big.toString(), "--out", out.toString(), "-q");
+        JsonNode root = new ObjectMapper().readTree(out.resolve("results.json").toFile());
+        assertEquals(ExitCodes.of(Verdict.valueOf(root.get("verdict").asText())), status, stderr.toString());
+        JsonNode positions = root.get("positions");
+        assertEquals(n, positions.size());
+        List<String> ids = DesignLoader.load(big).board().positions().stream().map(p -> p.id()).toList();
+        int detailed = 0;
+        for (int i = 0; i < n; i++) {
+            assertEquals(ids.get(i), positions.get(i).get("id").asText());
+            detailed += positions.get(i).get("detailed").asBoolean() ? 1 : 0;
+        }
+        assertEquals(ReportDetail.DEFAULT_LIMIT, detailed);
+        Map<String, Set<String>> ambientsOf = new HashMap<>();
+        try (Reader in = Files.newBufferedReader(out.resolve("sweep.csv"), StandardCharsets.UTF_8)) {
+            for (CSVRecord rec : CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get().parse(in)) {
+                ambientsOf.computeIfAbsent(rec.get("position"), k -> new HashSet<>()).add(rec.get("ambientC"));
+            }
+        }
+        assertEquals(new HashSet<>(ids), ambientsOf.keySet(), "every position in sweep.csv");
+        for (String id : ids) {
+            assertEquals(LargeBoardGenerator.SWEEP_POINTS, ambientsOf.get(id).size(), id + " at every ambient");
+        }
+        assertTrue(stdout.toString().contains("… and " + (n - ReportDetail.DEFAULT_LIMIT) + " more positions"));
+    }
 }
