@@ -61,7 +61,8 @@ public final class DesignLoader {
         inputs.addAll(problems.furtherInputs());
         Board b = m.board();
         Optional<StatisticsPlan> plan = m.statistics().map(h -> new StatisticsPlan(h.settings(), h.yieldPoints(),
-                h.surgeSamples(), m.distributions()));
+                h.surgeSamples(), m.distributions(), h.positions().map(l -> l.stream()
+                        .map(StatisticsReader.Selected::id).collect(java.util.stream.Collectors.toSet()))));
         return new LoadedDesign(b, policy, inputs, b.name(), plan, m.distributions());
     }
 

@@ -54,6 +54,17 @@ final class DesignReader {
                 .orElse(Distribution.UNIFORM);
         Map<String, VariationModel> models = new LinkedHashMap<>();
         Optional<List<PositionSpec>> positions = positions(top, refs, byDefault, models);
+        if (positions.isPresent() && stats.isPresent() && stats.get().positions().isPresent()) {
+            Set<String> ids = new java.util.HashSet<>();
+            positions.get().forEach(p -> ids.add(p.id()));
+            for (StatisticsReader.Selected sel : stats.get().positions().get()) {
+                if (!ids.contains(sel.id())) {
+                    top.ctx().report(InputProblem.Kind.UNKNOWN_REFERENCE, sel.at(), sel.path(), "'" + sel.id()
+                            + "' is not a position of this design");
+                    statsOk = false;
+                }
+            }
+        }
         if (!Fields.present(name, ambient, enclosure, positions) || !statsOk) {
             return Optional.empty();
         }

@@ -3,6 +3,7 @@ package org.tjmargin.design;
 import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.Locale;
+import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
@@ -20,7 +21,8 @@ import org.tjmargin.variation.statistical.StatisticsPlan;
  * Reads the design's {@code statistics} object and each position's {@code distributions}.
  *
  * <pre>
- * statistics: {samples: 10000, seed: 7, yield-points: 16, surge-samples: 200, distribution: uniform}
+ * statistics: {samples: 10000, seed: 7, yield-points: 16, surge-samples: 200, distribution: uniform,
+ *              positions: [D1, D4]}
  * positions:
  *   - id: D1
  *     distributions: {supply: normal 3σ, thermal-resistance: triangular}
@@ -28,12 +30,14 @@ import org.tjmargin.variation.statistical.StatisticsPlan;
  *
  * <p>A distribution is {@code uniform}, {@code triangular} (mode at the nominal) or {@code normal Kσ} (also
  * {@code normal K sigma}) with an optional {@code truncated}: the range's half-width spans K standard deviations.
- * The design-level {@code distribution} applies to every axis a position does not name.
+ * The design-level {@code distribution} applies to every axis a position does not name. {@code positions}, when
+ * given, names the positions the statistics run for (every position otherwise); each must be a position of the
+ * design, which {@link DesignReader} checks once the positions are read.
  */
 final class StatisticsReader {
 
     private static final Set<String> KEYS = Set.of("samples", "seed", "yield-points", "surge-samples",
-            "distribution");
+            "distribution", "positions");
 
     /** Distribution keys of a position, by the axis they name. */
     static final Map<String, Axis> AXIS_KEYS;
@@ -62,7 +66,12 @@ final class StatisticsReader {
     }
 
     /** The default distribution and the run's budget from {@code statistics}, without the positions' models. */
-    record Header(MonteCarloSettings settings, int yieldPoints, long surgeSamples, Distribution defaultDistribution) {
+    record Header(MonteCarloSettings settings, int yieldPoints, long surgeSamples, Distribution defaultDistribution,
+                  Optional<List<Selected>> positions) {
+    }
+
+    /** One id of {@code statistics.positions}, with where it was written. */
+    record Selected(String id, Node at, String path) {
     }
 
     static Optional<Header> header(Fields top) {
@@ -83,11 +92,28 @@ final class StatisticsReader {
             ok &= read.isPresent();
             d = read.orElse(d);
         }
+        Optional<List<Selected>> positions = Optional.empty();
+        if (f.has("positions")) {
+            positions = f.listOf("positions", Need.OPTIONAL, (node, path) -> {
+                if (node instanceof Node.Scalar sc && !sc.text().isBlank()) {
+                    return Optional.of(new Selected(sc.text().strip(), node, path));
+                }
+                f.ctx().report(InputProblem.Kind.WRONG_TYPE, node, path, "expected a position id, got "
+                        + node.describe());
+                return Optional.empty();
+            });
+            if (positions.isPresent() && positions.get().isEmpty()) {
+                f.report(InputProblem.Kind.MISSING_FIELD, "positions", "name at least one position, or leave "
+                        + "'positions' out to run the statistics for every position");
+                positions = Optional.empty();
+            }
+            ok &= positions.isPresent();
+        }
         if (!ok) {
             return Optional.empty();
         }
         return Optional.of(new Header(MonteCarloSettings.of(samples.get(), seed.get()), yieldPoints.get().intValue(),
-                surgeSamples.get(), d));
+                surgeSamples.get(), d, positions));
     }
 
     /**

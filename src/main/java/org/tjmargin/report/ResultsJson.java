@@ -109,7 +109,8 @@ public final class ResultsJson {
                     .put("provenance", rule.provenance());
         }
         if (stats.isPresent()) {
-            root.set("statistics", StatisticsJson.plan(NODES, stats.get().plan()));
+            root.set("statistics", StatisticsJson.plan(NODES, stats.get().plan(),
+                    r.positions().stream().map(PositionResult::id).toList()));
         } else {
             root.putNull("statistics");
         }

@@ -1,5 +1,6 @@
 package org.tjmargin.report;
 
+import java.util.List;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -29,8 +30,11 @@ final class StatisticsJson {
     }
 
     /** The run's budget and methods. */
-    static ObjectNode plan(JsonNodeFactory mapper, StatisticsPlan plan) {
+    static ObjectNode plan(JsonNodeFactory mapper, StatisticsPlan plan, List<String> positionIds) {
         ObjectNode o = mapper.objectNode();
+        ArrayNode covered = o.putArray("positions");
+        positionIds.stream().filter(plan::covers).forEach(covered::add);
+        o.put("selected", plan.positions().isPresent());
         o.put("samples", plan.settings().samples());
         o.put("seed", plan.settings().seed());
         o.put("blockSize", plan.settings().blockSize());

@@ -92,7 +92,9 @@ class BadInputTest {
                         "positions[0].distributions.load"),
                 Arguments.of("normal-distribution-reaches-zero.yaml", Kind.NOT_PHYSICAL, 16, 38,
                         "positions[0].distributions.series-resistor"),
-                Arguments.of("statistics-samples-not-a-count.yaml", Kind.WRONG_TYPE, 6, 23, "statistics.samples"));
+                Arguments.of("statistics-samples-not-a-count.yaml", Kind.WRONG_TYPE, 6, 23, "statistics.samples"),
+                Arguments.of("statistics-unknown-position.yaml", Kind.UNKNOWN_REFERENCE, 6, 54,
+                        "statistics.positions[1]"));
     }
 
     @ParameterizedTest(name = "{0}")

@@ -54,8 +54,8 @@ public final class StatisticalAnalysis {
         List<PositionSpec> specs = result.board().positions();
         int[] ambients = yieldIndices(result.sweep().size(), plan.yieldPoints());
         Work work = new Work(progress, totalSamples(result, plan));
-        List<PositionStatistics> out = IntStream.range(0, specs.size()).parallel()
-                .mapToObj(i -> position(result, i, plan, solver, ambients, work)).toList();
+        List<PositionStatistics> out = IntStream.range(0, specs.size()).filter(i -> plan.covers(specs.get(i).id()))
+                .parallel().mapToObj(i -> position(result, i, plan, solver, ambients, work)).toList();
         return new StatisticsResult(plan, out);
     }
 
@@ -64,7 +64,9 @@ public final class StatisticalAnalysis {
         int points = yieldIndices(result.sweep().size(), plan.yieldPoints()).length;
         long total = 0;
         for (PositionSpec s : result.board().positions()) {
-            total += samplesOf(s, plan, points);
+            if (plan.covers(s.id())) {
+                total += samplesOf(s, plan, points);
+            }
         }
         return total;
     }

@@ -71,6 +71,39 @@ class StatisticalAnalysisTest {
     }
 
     @Test
+    void theStatisticsBlockMayNameItsPositions(@org.junit.jupiter.api.io.TempDir Path dir) throws Exception {
+        Path fixture = Path.of("src/test/resources/bad-input/statistics-unknown-position.yaml");
+        String text = java.nio.file.Files.readString(fixture)
+                .replace("positions: [D1, D7]", "positions: [D1]")
+                .replace("parts: ../design/parts.json", "parts: " + Path.of("src/test/resources/design/parts.json")
+                        .toAbsolutePath());
+        Path design = java.nio.file.Files.writeString(dir.resolve("selected.yaml"), text);
+        StatisticsPlan p = DesignLoader.load(design).statistics().orElseThrow();
+        assertEquals(Optional.of(java.util.Set.of("D1")), p.positions());
+        assertTrue(p.covers("D1"));
+        assertFalse(p.covers("D2"));
+        assertTrue(plan.covers("any"), "without a selection every position is covered");
+    }
+
+    /**
+     * A design may name the positions its statistics run for (a large board needs them for a few only): the others
+     * get none, and the named ones get exactly the numbers of the run over every position, because each position
+     * draws from its own split stream (the determinism property of design 2.7).
+     */
+    @Test
+    void aSelectionOfPositionsRunsThoseOnlyWithTheSameNumbers() {
+        StatisticsPlan only = new StatisticsPlan(plan.settings(), plan.yieldPoints(), plan.surgeSamples(),
+                plan.models(), Optional.of(java.util.Set.of("D2")));
+        StatisticsResult some = StatisticalAnalysis.run(result, only, SolverSettings.DEFAULT, StatisticsProgress.NONE);
+        assertEquals(1, some.positions().size());
+        assertEquals(some.of("D2").orElseThrow(), stats.of("D2").orElseThrow());
+        assertTrue(some.of("D1").isEmpty());
+        assertEquals(StatisticalAnalysis.samplesOf(result.board().positions().get(1), plan, plan.yieldPoints()),
+                StatisticalAnalysis.totalSamples(result, only));
+        assertEquals("D2", result.board().positions().get(1).id());
+    }
+
+    @Test
     void everyPositionHasItsRunsAtTheHighestAmbient() {
         assertEquals(result.board().positions().size(), stats.positions().size());
         for (PositionStatistics p : stats.positions()) {
