@@ -1,6 +1,7 @@
 package org.tjmargin.solve;
 
 import org.tjmargin.circuit.CircuitPoint;
+import org.tjmargin.device.PreparedDiode;
 
 /**
  * The heat one corner of a position puts into the enclosure air (diode plus series resistor), as the board's air
@@ -46,16 +47,19 @@ final class CornerHeat {
     /** As {@link #inAir}, with the diode's share and the outcome. */
     static Heat heatInAir(PositionInstance inst, double tLocalK, SolverSettings settings) {
         final double rTheta = inst.path().rThetaJaKPerW();
+        // The knee and leakage constants once per search, as ElectroThermalSolver does (equal results, see
+        // PreparedDiode); Circuit.at(BreakdownDiode, …) would prepare them at every evaluation.
+        final PreparedDiode prepared = PreparedDiode.of(inst.diode());
         final CircuitPoint[] last = new CircuitPoint[1];
         final double[] lastTj = {Double.NaN};
         FixedPointOutcome outcome = LowestFixedPoint.find(tj -> {
-            CircuitPoint cp = inst.circuit().at(inst.diode(), tj);
+            CircuitPoint cp = inst.circuit().at(prepared, tj);
             last[0] = cp;
             lastTj[0] = tj;
             return tLocalK + rTheta * cp.diodePowerW();
         }, tLocalK, settings, false);
         if (outcome instanceof FixedPointOutcome.Root r) {
-            CircuitPoint cp = lastTj[0] == r.x() ? last[0] : inst.circuit().at(inst.diode(), r.x());
+            CircuitPoint cp = lastTj[0] == r.x() ? last[0] : inst.circuit().at(prepared, r.x());
             return new Heat(cp.diodePowerW() + cp.resistorPowerW(), cp.diodePowerW(), PointStatus.CONVERGED);
         }
         if (outcome instanceof FixedPointOutcome.Runaway) {
