@@ -3,6 +3,7 @@ package org.tjmargin.report;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.util.List;
+import com.fasterxml.jackson.core.io.NumberOutput;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.tjmargin.solve.AnalysisResult;
@@ -68,11 +69,23 @@ public final class SweepCsv {
     private static void row(CSVPrinter csv, BoardAtAmbient b, PositionAtAmbient p, String role, CornerPoint c)
             throws IOException {
         OperatingPoint op = c.point().orElse(null);
-        csv.printRecord(p.positionId(), Labels.celsius(p.ambientK()), Labels.celsius(p.tLocalK()), b.enclosureRiseK(),
-                c.status().name(), p.margin(), p.limitingRuleId(), role, c.corner().label(),
-                op == null ? "" : Labels.celsius(op.tjK()), op == null ? "" : Labels.celsius(op.referenceK()),
-                op == null ? "" : op.circuit().voltageV(), op == null ? "" : op.circuit().diodeCurrentA(),
-                op == null ? "" : op.diodePowerW(), op == null ? "" : op.circuit().resistorPowerW(),
-                c.allowedPowerW(), op == null ? "" : op.loopGain(), op == null ? "" : op.evaluations());
+        csv.printRecord(p.positionId(), num(Labels.celsius(p.ambientK())), num(Labels.celsius(p.tLocalK())),
+                num(b.enclosureRiseK()), c.status().name(), num(p.margin()), p.limitingRuleId(), role,
+                c.corner().label(),
+                op == null ? "" : num(Labels.celsius(op.tjK())), op == null ? "" : num(Labels.celsius(op.referenceK())),
+                op == null ? "" : num(op.circuit().voltageV()), op == null ? "" : num(op.circuit().diodeCurrentA()),
+                op == null ? "" : num(op.diodePowerW()), op == null ? "" : num(op.circuit().resistorPowerW()),
+                num(c.allowedPowerW()), op == null ? "" : num(op.loopGain()), op == null ? "" : op.evaluations());
+    }
+
+    /**
+     * A number as the shortest decimal that reads back as the same double (the Schubfach algorithm, R. Giulietti,
+     * "The Schubfach way to render doubles", 2020, as Jackson ships it; Java 19 and later use the same in
+     * {@code Double.toString}). Java 17's {@code Double.toString} sometimes writes a digit more than needed
+     * ({@code 0.0020} for 2e-3) and is several times slower, which shows on the two hundred thousand rows of a
+     * large board.
+     */
+    static String num(double v) {
+        return NumberOutput.toString(v, true);
     }
 }
