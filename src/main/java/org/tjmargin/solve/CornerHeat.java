@@ -47,9 +47,9 @@ final class CornerHeat {
     /** As {@link #inAir}, with the diode's share and the outcome. */
     static Heat heatInAir(PositionInstance inst, double tLocalK, SolverSettings settings) {
         final double rTheta = inst.path().rThetaJaKPerW();
-        // The knee and leakage constants once per search, as ElectroThermalSolver does (equal results, see
-        // PreparedDiode); Circuit.at(BreakdownDiode, …) would prepare them at every evaluation.
-        final PreparedDiode prepared = PreparedDiode.of(inst.diode());
+        // The instance's prepared constants (equal results, see PreparedDiode); Circuit.at(BreakdownDiode, …) would
+        // prepare them at every evaluation.
+        final PreparedDiode prepared = inst.prepared();
         final CircuitPoint[] last = new CircuitPoint[1];
         final double[] lastTj = {Double.NaN};
         FixedPointOutcome outcome = LowestFixedPoint.find(tj -> {
@@ -70,7 +70,7 @@ final class CornerHeat {
     }
 
     private static double heatAt(PositionInstance inst, double tjK) {
-        CircuitPoint cp = inst.circuit().at(inst.diode(), tjK);
+        CircuitPoint cp = inst.circuit().at(inst.prepared(), tjK);
         return cp.diodePowerW() + cp.resistorPowerW();
     }
 }

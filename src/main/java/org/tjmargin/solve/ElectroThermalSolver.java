@@ -32,9 +32,14 @@ public final class ElectroThermalSolver {
      */
     public static ThermalOutcome solve(Circuit circuit, BreakdownDiode diode, SteadyThermalPath path, double tLocalK,
                                        SolverSettings settings) {
-        final double rTheta = path.rThetaJaKPerW();
         // The knee and leakage constants once per solve, not once per evaluation (equal results, see PreparedDiode).
-        final PreparedDiode prepared = PreparedDiode.of(diode);
+        return solve(circuit, PreparedDiode.of(diode), path, tLocalK, settings);
+    }
+
+    /** As above, with the diode's constants already prepared (once per corner, see {@link PositionInstance}). */
+    public static ThermalOutcome solve(Circuit circuit, PreparedDiode prepared, SteadyThermalPath path, double tLocalK,
+                                       SolverSettings settings) {
+        final double rTheta = path.rThetaJaKPerW();
         // The circuit points of the last evaluations, so that the point at the root (evaluated just before the two
         // of the loop gain) is not solved again. Local to this call: the solver stays thread-safe.
         final Recent recent = new Recent();

@@ -77,7 +77,7 @@ public record Regulation(double lineInstantVPerV, double lineEquilibriumVPerV, d
 
     private static Optional<OperatingPoint> solve(PositionInstance inst, ShuntRegulator r, double tLocalK,
                                                   SolverSettings settings) {
-        ThermalOutcome out = ElectroThermalSolver.solve(r, inst.diode(), inst.path(), tLocalK, settings);
+        ThermalOutcome out = ElectroThermalSolver.solve(r, inst.prepared(), inst.path(), tLocalK, settings);
         return out instanceof ThermalOutcome.Converged c ? Optional.of(c.point()) : Optional.empty();
     }
 }
