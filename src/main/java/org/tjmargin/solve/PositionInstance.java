@@ -30,6 +30,18 @@ public record PositionInstance(Corner corner, BreakdownDiode diode, Circuit circ
         this(corner, diode, circuit, path, PreparedDiode.of(diode));
     }
 
+    /** Equal when corner, diode, circuit and path are: the prepared constants follow from the diode. */
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof PositionInstance p && corner.equals(p.corner) && diode.equals(p.diode)
+                && circuit.equals(p.circuit) && path.equals(p.path);
+    }
+
+    @Override
+    public int hashCode() {
+        return java.util.Objects.hash(corner, diode, circuit, path);
+    }
+
     /** Solves this instance's operating point in air at {@code tLocalK}. */
     public ThermalOutcome solve(double tLocalK, SolverSettings settings) {
         return ElectroThermalSolver.solve(circuit, prepared, path, tLocalK, settings);
