@@ -47,7 +47,11 @@ public record Rule(String id, String title, Measure measure, Bound bound, Limit 
         if (Double.isNaN(actual)) {
             return null;
         }
-        double lim = limit.valueFor(context);
+        return checkOf(actual, limit.valueFor(context));
+    }
+
+    /** The check of {@code actual} against {@code lim}: the one place a {@link RuleCheck} is made. */
+    RuleCheck checkOf(double actual, double lim) {
         return new RuleCheck(id, measure, bound, actual, lim, marginOf(actual, lim),
                 bound == Bound.MAX ? lim - actual : actual - lim);
     }

@@ -1,12 +1,10 @@
 package org.tjmargin.solve;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import org.tjmargin.derating.Policy;
-import org.tjmargin.derating.RuleCheck;
 import org.tjmargin.derating.RuleContext;
+import org.tjmargin.derating.WorstChecks;
 import org.tjmargin.surge.SurgeResult;
 import org.tjmargin.thermal.Enclosure;
 
@@ -132,7 +130,7 @@ public final class BoardSolver {
         int least = -1;
         double leastI = Double.POSITIVE_INFINITY;
         PointStatus status = PointStatus.CONVERGED;
-        Map<String, WorstCheck> worst = new LinkedHashMap<>();
+        WorstChecks worst = new WorstChecks(policy);
         double resistorAllowed = spec.resistorAllowedW(tLocalK);
         List<ThermalOutcome> outcomes = solved;
         if (outcomes == null) {
@@ -178,25 +176,23 @@ public final class BoardSolver {
                 ctx = Measurements.unresolved(spec, ((ThermalOutcome.NotConverged) out).lastTjK(), tLocalK);
                 status = status.worse(PointStatus.NOT_CONVERGED);
             }
-            List<RuleCheck> checks = policy.check(ctx);
-            for (RuleCheck rc : checks) {
-                WorstCheck w = worst.get(rc.ruleId());
-                if (w == null || rc.margin() < w.check().margin()) {
-                    worst.put(rc.ruleId(), new WorstCheck(rc, k));
-                }
-            }
+            worst.add(ctx, k);
             corners.add(new CornerPoint(inst.corner(), out, allowed, resistorAllowed, surges));
+        }
+        List<WorstCheck> worstByRule = new ArrayList<>();
+        for (WorstChecks.Worst w : worst.worst()) {
+            worstByRule.add(new WorstCheck(w.check(), w.cornerIndex()));
         }
         double margin = 1.0;
         String limiting = "none";
-        for (WorstCheck w : worst.values()) {
+        for (WorstCheck w : worstByRule) {
             if (w.check().margin() < margin || "none".equals(limiting)) {
                 margin = w.check().margin();
                 limiting = w.check().ruleId();
             }
         }
         return new PositionAtAmbient(spec.id(), ambientK, tLocalK, corners, hottest, least,
-                new ArrayList<>(worst.values()), margin, limiting, status);
+                worstByRule, margin, limiting, status);
     }
 
     /** Heat of the board with the air at {@code tLocalK}: every position at its corner of greatest heat. */
