@@ -148,15 +148,11 @@ class LargeBoardEndToEndTest {
     @Test
     void commandLineWritesEveryPositionAndDetailsTheLeastMargins() throws IOException {
         Path out = tmp.resolve("out");
-        CommandLine cl = Main.commandLine();
-        StringWriter stdout = new StringWriter();
-        StringWriter stderr = new StringWriter();
-        cl.setOut(new PrintWriter(stdout));
-        cl.setErr(new PrintWriter(stderr));
         int detail = 7;
-        int status = cl.execute("analyse", design.toString(), "--out", out.toString(), "--detail",
+        Run run = run("analyse", design.toString(), "--out", out.toString(), "--detail",
                 Integer.toString(detail), "--policy", "high-reliability", "-q");
-        assertTrue(status == ExitCodes.PASS || status == ExitCodes.VIOLATION, stderr.toString());
+        int status = run.status();
+        assertTrue(status == ExitCodes.PASS || status == ExitCodes.VIOLATION, run.stderr());
         LoadedDesign loaded = DesignLoader.load(design);
         List<String> ids = loaded.board().positions().stream().map(p -> p.id()).toList();
 
@@ -222,7 +218,7 @@ class LargeBoardEndToEndTest {
                 assertEquals(positions.get(i).get("detailed").asBoolean(), charted.contains(ids.get(i)), ids.get(i));
             }
         }
-        String table = stdout.toString();
+        String table = run.stdout();
         assertTrue(table.contains("… and " + (POSITIONS - detail) + " more positions"), table);
         assertEquals(detail + 3, table.lines().takeWhile(l -> !l.startsWith("…")).count(),
                 "title, header, rule and one row per detailed position before the count of the rest");
@@ -239,14 +235,9 @@ class LargeBoardEndToEndTest {
         int n = 1000;
         Path big = LargeBoardGenerator.write(n, 1, LargeBoardGenerator.demoParts(), tmp.resolve("board-1000.yaml"));
         Path out = tmp.resolve("out-1000");
-        CommandLine cl = Main.commandLine();
-        StringWriter stdout = new StringWriter();
-        StringWriter stderr = new StringWriter();
-        cl.setOut(new PrintWriter(stdout));
-        cl.setErr(new PrintWriter(stderr));
-        int status = cl.execute("analyse", big.toString(), "--out", out.toString(), "-q");
+        Run run = run("analyse", big.toString(), "--out", out.toString(), "-q");
         JsonNode root = new ObjectMapper().readTree(out.resolve("results.json").toFile());
-        assertEquals(ExitCodes.of(Verdict.valueOf(root.get("verdict").asText())), status, stderr.toString());
+        assertEquals(ExitCodes.of(Verdict.valueOf(root.get("verdict").asText())), run.status(), run.stderr());
         JsonNode positions = root.get("positions");
         assertEquals(n, positions.size());
         List<String> ids = DesignLoader.load(big).board().positions().stream().map(p -> p.id()).toList();
@@ -266,6 +257,20 @@ class LargeBoardEndToEndTest {
         for (String id : ids) {
             assertEquals(LargeBoardGenerator.SWEEP_POINTS, ambientsOf.get(id).size(), id + " at every ambient");
         }
-        assertTrue(stdout.toString().contains("… and " + (n - ReportDetail.DEFAULT_LIMIT) + " more positions"));
+        assertTrue(run.stdout().contains("… and " + (n - ReportDetail.DEFAULT_LIMIT) + " more positions"));
+    }
+
+    /** What one command-line run printed and returned. */
+    private record Run(int status, String stdout, String stderr) {
+    }
+
+    private static Run run(String... args) {
+        CommandLine cl = Main.commandLine();
+        StringWriter stdout = new StringWriter();
+        StringWriter stderr = new StringWriter();
+        cl.setOut(new PrintWriter(stdout));
+        cl.setErr(new PrintWriter(stderr));
+        int status = cl.execute(args);
+        return new Run(status, stdout.toString(), stderr.toString());
     }
 }
