@@ -49,7 +49,12 @@ public final class Analysis {
         for (PositionResult r : results) {
             overall = overall.worse(r.verdict());
         }
-        return new AnalysisResult(board, policy, sweep, results, overall);
+        // Every corner at the highest ambient is reported, so every one gets its loop gain (the sweep's solves
+        // compute it only for the hottest and least-current corner).
+        List<BoardAtAmbient> reported = new java.util.ArrayList<>(sweep);
+        int last = reported.size() - 1;
+        reported.set(last, BoardSolver.withEveryLoopGain(prepared, reported.get(last)));
+        return new AnalysisResult(board, policy, reported, results, overall);
     }
 
     private static PositionResult positionResult(PreparedBoard prepared, Policy policy, List<BoardAtAmbient> sweep,

@@ -136,7 +136,7 @@ public final class BoardSolver {
         if (outcomes == null) {
             outcomes = new ArrayList<>(instances.size());
             for (PositionInstance inst : instances) {
-                outcomes.add(inst.solve(tLocalK, settings));
+                outcomes.add(inst.solveWithoutLoopGain(tLocalK, settings));
             }
         }
         boolean[] surgeAt = SurgeChecks.cornersToEvaluate(spec, instances, outcomes);
@@ -179,6 +179,9 @@ public final class BoardSolver {
             worst.add(ctx, k);
             corners.add(new CornerPoint(inst.corner(), out, allowed, resistorAllowed, surges));
         }
+        // The reported corners get their loop gain (the solves above may have skipped it).
+        withLoopGain(corners, instances, hottest);
+        withLoopGain(corners, instances, least);
         List<WorstCheck> worstByRule = new ArrayList<>();
         for (WorstChecks.Worst w : worst.worst()) {
             worstByRule.add(new WorstCheck(w.check(), w.cornerIndex()));
@@ -195,6 +198,37 @@ public final class BoardSolver {
                 worstByRule, margin, limiting, status);
     }
 
+    /** Corner {@code k} of {@code corners} with its loop gain ({@code k < 0}: none). */
+    private static void withLoopGain(List<CornerPoint> corners, List<PositionInstance> instances, int k) {
+        if (k < 0) {
+            return;
+        }
+        CornerPoint c = corners.get(k);
+        ThermalOutcome out = ElectroThermalSolver.withLoopGain(instances.get(k), c.outcome());
+        if (out != c.outcome()) {
+            corners.set(k, new CornerPoint(c.corner(), out, c.allowedPowerW(), c.resistorAllowedW(), c.surges()));
+        }
+    }
+
+    /**
+     * The board with every corner's loop gain: for the design's highest ambient, where every corner is reported
+     * (results.json's corners at the highest ambient, the report's corner table).
+     */
+    static BoardAtAmbient withEveryLoopGain(PreparedBoard board, BoardAtAmbient b) {
+        List<PositionAtAmbient> positions = new ArrayList<>(b.positions().size());
+        for (int i = 0; i < b.positions().size(); i++) {
+            PositionAtAmbient p = b.positions().get(i);
+            List<CornerPoint> corners = new ArrayList<>(p.corners());
+            for (int k = 0; k < corners.size(); k++) {
+                withLoopGain(corners, board.instances().get(i), k);
+            }
+            positions.add(new PositionAtAmbient(p.positionId(), p.ambientK(), p.tLocalK(), corners, p.hottestIndex(),
+                    p.leastCurrentIndex(), p.worst(), p.margin(), p.limitingRuleId(), p.status()));
+        }
+        return new BoardAtAmbient(b.ambientK(), b.enclosureRiseK(), b.boardHeatW(), positions,
+                b.couplingEvaluations(), b.status());
+    }
+
     /** Heat of the board with the air at {@code tLocalK}: every position at its corner of greatest heat. */
     private static double boardHeatW(PreparedBoard board, double tLocalK, SolverSettings settings, LastHeat last) {
         double sum = 0;
@@ -203,7 +237,7 @@ public final class BoardSolver {
             double max = 0;
             List<ThermalOutcome> outs = new ArrayList<>(insts.size());
             for (PositionInstance inst : insts) {
-                ThermalOutcome out = inst.solve(tLocalK, settings);
+                ThermalOutcome out = inst.solveWithoutLoopGain(tLocalK, settings);
                 outs.add(out);
                 max = Math.max(max, CornerHeat.of(inst, out, settings));
             }

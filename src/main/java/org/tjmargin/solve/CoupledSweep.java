@@ -273,7 +273,7 @@ final class CoupledSweep {
             double m = 0;
             int hottest = 0;
             for (int k = 0; k < insts.size(); k++) {
-                ThermalOutcome o = insts.get(k).solve(tLocalK, settings);
+                ThermalOutcome o = insts.get(k).solveWithoutLoopGain(tLocalK, settings);
                 outs.add(o);
                 h[k] = CornerHeat.of(insts.get(k), o, settings);
                 if (h[k] > m) {

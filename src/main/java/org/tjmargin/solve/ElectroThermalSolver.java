@@ -39,6 +39,15 @@ public final class ElectroThermalSolver {
     /** As above, with the diode's constants already prepared (once per corner, see {@link PositionInstance}). */
     public static ThermalOutcome solve(Circuit circuit, PreparedDiode prepared, SteadyThermalPath path, double tLocalK,
                                        SolverSettings settings) {
+        return solve(circuit, prepared, path, tLocalK, settings, true);
+    }
+
+    /**
+     * As above; without {@code loopGain} the point's loop gain is left NaN and its two evaluations are saved, for
+     * the sweep's corners whose gain nobody reads (only the reported corners' are: {@link #withLoopGain}).
+     */
+    static ThermalOutcome solve(Circuit circuit, PreparedDiode prepared, SteadyThermalPath path, double tLocalK,
+                                SolverSettings settings, boolean loopGain) {
         final double rTheta = path.rThetaJaKPerW();
         // The circuit points of the last evaluations, so that the point at the root (evaluated just before the two
         // of the loop gain) is not solved again. Local to this call: the solver stays thread-safe.
@@ -47,19 +56,36 @@ public final class ElectroThermalSolver {
             CircuitPoint cp = circuit.at(prepared, tj);
             recent.keep(tj, cp);
             return tLocalK + rTheta * cp.diodePowerW();
-        }, tLocalK, settings);
+        }, tLocalK, settings, loopGain);
         if (outcome instanceof FixedPointOutcome.Root r) {
             CircuitPoint kept = recent.at(r.x());
             CircuitPoint cp = kept != null ? kept : circuit.at(prepared, r.x());
             double refK = path.referenceTemperatureK(r.x(), cp.diodePowerW());
             return new ThermalOutcome.Converged(new OperatingPoint(r.x(), tLocalK, refK, cp,
-                    r.evaluations() + (kept != null ? 0 : 1), r.loopGain(), r.residual()));
+                    r.evaluations() + (kept != null ? 0 : 1), loopGain ? r.loopGain() : Double.NaN, r.residual()));
         }
         if (outcome instanceof FixedPointOutcome.Runaway) {
             return new ThermalOutcome.Runaway(tLocalK, settings.capK());
         }
         FixedPointOutcome.Exhausted e = (FixedPointOutcome.Exhausted) outcome;
         return new ThermalOutcome.NotConverged(tLocalK, e.lastX(), e.residual(), e.evaluations());
+    }
+
+    /**
+     * {@code out} with its loop gain, where a solve without it left NaN: the same two evaluations at the root that
+     * the solve would have made ({@link LowestFixedPoint#loopGain}), so the point is the one the solve with the gain
+     * returns, bit for bit, evaluation count included. Any other outcome is returned as it is.
+     */
+    static ThermalOutcome withLoopGain(PositionInstance inst, ThermalOutcome out) {
+        if (!(out instanceof ThermalOutcome.Converged c) || !Double.isNaN(c.point().loopGain())) {
+            return out;
+        }
+        OperatingPoint p = c.point();
+        double rTheta = inst.path().rThetaJaKPerW();
+        double gain = LowestFixedPoint.loopGain(
+                tj -> p.tLocalK() + rTheta * inst.circuit().at(inst.prepared(), tj).diodePowerW(), p.tjK());
+        return new ThermalOutcome.Converged(new OperatingPoint(p.tjK(), p.tLocalK(), p.referenceK(), p.circuit(),
+                p.evaluations() + 2, gain, p.residualK()));
     }
 
     /** The circuit points of the last three evaluations of one solve, by junction temperature. */

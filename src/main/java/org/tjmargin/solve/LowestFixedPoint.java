@@ -173,7 +173,14 @@ public final class LowestFixedPoint {
         }
         // The root itself was evaluated just before these two: a caller that keeps the state of its last three
         // evaluations still holds the root's (ElectroThermalSolver does).
-        double gain = (map.applyAsDouble(x + GAIN_STEP) - map.applyAsDouble(x - GAIN_STEP)) / (2 * GAIN_STEP);
-        return new FixedPointOutcome.Root(x, g, gain, evals + 2);
+        return new FixedPointOutcome.Root(x, g, loopGain(map, x), evals + 2);
+    }
+
+    /**
+     * The loop gain {@code dF/dx} at {@code x}, a central difference over ±{@value #GAIN_STEP}: two evaluations of
+     * {@code map}, the only place it is computed (also for a root found without it and asked for later).
+     */
+    static double loopGain(DoubleUnaryOperator map, double x) {
+        return (map.applyAsDouble(x + GAIN_STEP) - map.applyAsDouble(x - GAIN_STEP)) / (2 * GAIN_STEP);
     }
 }

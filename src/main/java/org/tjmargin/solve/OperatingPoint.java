@@ -10,7 +10,10 @@ import org.tjmargin.circuit.CircuitPoint;
  * @param referenceK   temperature of the rating's reference point: lead at the rating distance, case, or air (K)
  * @param circuit      the electrical point at {@code tjK}
  * @param evaluations  circuit evaluations the solve used
- * @param loopGain     {@code Rθ·dP/dTj} at the root; stable below 1
+ * @param loopGain     {@code Rθ·dP/dTj} at the root; stable below 1. NaN for a sweep corner that is not reported
+ *                     (its gain is read by nothing, see {@link ElectroThermalSolver#withLoopGain}): every corner a
+ *                     result shows (the hottest and least-current at each ambient, every corner at the highest) has
+ *                     it
  * @param residualK    heat-balance residual {@code Tj − T_local − Rθ·P} (K)
  */
 public record OperatingPoint(double tjK, double tLocalK, double referenceK, CircuitPoint circuit, int evaluations,

@@ -46,4 +46,12 @@ public record PositionInstance(Corner corner, BreakdownDiode diode, Circuit circ
     public ThermalOutcome solve(double tLocalK, SolverSettings settings) {
         return ElectroThermalSolver.solve(circuit, prepared, path, tLocalK, settings);
     }
+
+    /**
+     * As {@link #solve}, with the loop gain left NaN (two circuit evaluations fewer): for the sweep's corners, whose
+     * gain is read only where a corner is reported, and completed there by {@link ElectroThermalSolver#withLoopGain}.
+     */
+    ThermalOutcome solveWithoutLoopGain(double tLocalK, SolverSettings settings) {
+        return ElectroThermalSolver.solve(circuit, prepared, path, tLocalK, settings, false);
+    }
 }
