@@ -78,15 +78,18 @@ final class TheveninDrive {
                     hi = i;
                 }
                 double zz = d.dynamicImpedanceOhm(i);
-                double next = i + h / (zz + rthOhm);
+                double step = h / (zz + rthOhm);
+                if (Math.abs(step) <= 1e-13 * hi) {
+                    // Converged (h may be exactly 0). Tested before the bracket: a zero step lands on the bracket's
+                    // end and would otherwise be taken for a step out of it and bisect away from the root. One more
+                    // evaluation would change V by Zz·Δ only (the second-order term is ~1e-26 V).
+                    v += zz * step;
+                    i += step;
+                    break;
+                }
+                double next = i + step;
                 if (!(next > lo && next < hi)) {
                     next = 0.5 * (lo + hi);
-                }
-                if (Math.abs(next - i) <= 1e-13 * hi) {
-                    // One more evaluation would change V by Zz·Δ only (the second-order term is ~1e-26 V).
-                    v += zz * (next - i);
-                    i = next;
-                    break;
                 }
                 i = next;
                 v = d.breakdownVoltageV(i, tjK);
