@@ -1,6 +1,7 @@
 package org.tjmargin.design;
 
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -55,7 +56,7 @@ final class DesignReader {
         Map<String, VariationModel> models = new LinkedHashMap<>();
         Optional<List<PositionSpec>> positions = positions(top, refs, byDefault, models);
         if (positions.isPresent() && stats.isPresent() && stats.get().positions().isPresent()) {
-            Set<String> ids = new java.util.HashSet<>();
+            Set<String> ids = new HashSet<>();
             positions.get().forEach(p -> ids.add(p.id()));
             for (StatisticsReader.Selected sel : stats.get().positions().get()) {
                 if (!ids.contains(sel.id())) {

@@ -4,9 +4,9 @@ import java.awt.Font;
 import java.awt.RenderingHints;
 import java.util.List;
 import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.Axis;
 import org.jfree.chart.axis.CategoryAxis;
 import org.jfree.chart.axis.NumberAxis;
-import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.CategoryPlot;
 import org.jfree.chart.plot.XYPlot;
@@ -82,13 +82,10 @@ final class ChartStyle {
         plot.setDomainGridlinesVisible(false);
         plot.setAxisOffset(new RectangleInsets(4, 4, 4, 4));
         CategoryAxis rows = plot.getDomainAxis();
+        axis(rows);
         if (rows != null) {
-            rows.setLabelFont(AXIS_LABEL);
-            rows.setLabelPaint(Palette.INK);
-            rows.setTickLabelFont(TICK);
+            // The rows' labels name the inputs: in full ink, not the soft ink of numeric ticks.
             rows.setTickLabelPaint(Palette.INK);
-            rows.setAxisLinePaint(Palette.INK_SOFT);
-            rows.setTickMarkPaint(Palette.INK_SOFT);
         }
         for (int i = 0; i < plot.getRangeAxisCount(); i++) {
             axis(plot.getRangeAxis(i));
@@ -103,7 +100,8 @@ final class ChartStyle {
         return a;
     }
 
-    static void axis(ValueAxis a) {
+    /** The house look of any axis (value or category): fonts, inks, axis line and tick marks. */
+    static void axis(Axis a) {
         if (a == null) {
             return;
         }

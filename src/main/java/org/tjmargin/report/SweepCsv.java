@@ -23,6 +23,8 @@ public final class SweepCsv {
         "limitingRule", "cornerRole", "corner", "tjC", "referenceC", "voltageV", "currentA", "powerW",
         "resistorPowerW", "allowedPowerW", "loopGain", "iterations"};
 
+    private static final CSVFormat FORMAT = CSVFormat.RFC4180;
+
     private SweepCsv() {
     }
 
@@ -43,8 +45,6 @@ public final class SweepCsv {
         parts.forEach(all::append);
         return all.toString();
     }
-
-    private static final CSVFormat FORMAT = CSVFormat.RFC4180;
 
     /** The rows of one ambient, without the header. */
     private static String rows(BoardAtAmbient b) {

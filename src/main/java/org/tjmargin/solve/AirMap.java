@@ -30,7 +30,9 @@ import org.tjmargin.thermal.Enclosure;
  * until they pass or are {@value #MIN_CELL_K} K wide.
  *
  * <p>Error bound. Linear interpolation of {@code A} over a cell of width {@code w} errs by at most
- * {@code |A''|·w²/8}. The bound used is {@code 4·w²/2·|f|}, with {@code f} the smaller in magnitude of the second
+ * {@code |A''|·w²/8} (the remainder of linear interpolation, {@code f''(ξ)/2·(x − x0)(x − x1)}, largest at the
+ * cell's middle; e.g. R. L. Burden and J. D. Faires, <i>Numerical Analysis</i>, Theorem 3.3, from memory, verify).
+ * The bound used is {@code 4·w²/2·|f|}, with {@code f} the smaller in magnitude of the second
  * divided differences of the cell with its left and with its right neighbour ({@code ≈ A''/2} where {@code A} is
  * smooth). For a locally quadratic {@code A} that is eight times the error. Where the cell holds a kink of {@code A}
  * (a position's hottest corner changing, the only non-smooth point of the board heat apart from runaway) of slope

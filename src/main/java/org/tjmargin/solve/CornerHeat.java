@@ -56,7 +56,7 @@ final class CornerHeat {
             CircuitPoint cp = inst.circuit().at(prepared, tj);
             last[0] = cp;
             lastTj[0] = tj;
-            return tLocalK + rTheta * cp.diodePowerW();
+            return ElectroThermalSolver.junctionK(tLocalK, rTheta, cp.diodePowerW());
         }, tLocalK, settings, false);
         if (outcome instanceof FixedPointOutcome.Root r) {
             CircuitPoint cp = lastTj[0] == r.x() ? last[0] : inst.circuit().at(prepared, r.x());

@@ -55,7 +55,7 @@ public final class ElectroThermalSolver {
         FixedPointOutcome outcome = LowestFixedPoint.find(tj -> {
             CircuitPoint cp = circuit.at(prepared, tj);
             recent.keep(tj, cp);
-            return tLocalK + rTheta * cp.diodePowerW();
+            return junctionK(tLocalK, rTheta, cp.diodePowerW());
         }, tLocalK, settings, loopGain);
         if (outcome instanceof FixedPointOutcome.Root r) {
             CircuitPoint kept = recent.at(r.x());
@@ -72,6 +72,15 @@ public final class ElectroThermalSolver {
     }
 
     /**
+     * The heat balance's map {@code F(Tj) = T_local + Rθja·P(Tj)} (design 2.3, steady conduction through one thermal
+     * resistance): the junction temperature that dissipating {@code diodePowerW} in air at {@code tLocalK} settles
+     * at. Every junction search of the solvers iterates this one expression.
+     */
+    static double junctionK(double tLocalK, double rThetaKPerW, double diodePowerW) {
+        return tLocalK + rThetaKPerW * diodePowerW;
+    }
+
+    /**
      * {@code out} with its loop gain, where a solve without it left NaN: the same two evaluations at the root that
      * the solve would have made ({@link LowestFixedPoint#loopGain}), so the point is the one the solve with the gain
      * returns, bit for bit, evaluation count included. Any other outcome is returned as it is.
@@ -83,7 +92,7 @@ public final class ElectroThermalSolver {
         OperatingPoint p = c.point();
         double rTheta = inst.path().rThetaJaKPerW();
         double gain = LowestFixedPoint.loopGain(
-                tj -> p.tLocalK() + rTheta * inst.circuit().at(inst.prepared(), tj).diodePowerW(), p.tjK());
+                tj -> junctionK(p.tLocalK(), rTheta, inst.circuit().at(inst.prepared(), tj).diodePowerW()), p.tjK());
         return new ThermalOutcome.Converged(new OperatingPoint(p.tjK(), p.tLocalK(), p.referenceK(), p.circuit(),
                 p.evaluations() + 2, gain, p.residualK()));
     }

@@ -22,10 +22,12 @@ class CommandLineTest {
     @TempDir
     Path tmp;
 
-    private record Run(int status, String out, String err) {
+    /** What one command-line run returned and printed (also used by the other command-line tests). */
+    record Run(int status, String out, String err) {
     }
 
-    private static Run run(String... args) {
+    /** Runs the command line in process with {@code args}, its output captured. */
+    static Run run(String... args) {
         CommandLine cl = Main.commandLine();
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();

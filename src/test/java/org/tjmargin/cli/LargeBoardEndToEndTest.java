@@ -7,9 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
-import java.io.PrintWriter;
 import java.io.Reader;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -41,7 +39,6 @@ import org.tjmargin.solve.PositionResult;
 import org.tjmargin.solve.SolverSettings;
 import org.tjmargin.solve.Verdict;
 import org.tjmargin.thermal.Enclosure;
-import picocli.CommandLine;
 
 /**
  * A generated INVENTED board of 50 positions in one sealed box ({@link LargeBoardGenerator}), loaded and analysed end
@@ -149,10 +146,10 @@ class LargeBoardEndToEndTest {
     void commandLineWritesEveryPositionAndDetailsTheLeastMargins() throws IOException {
         Path out = tmp.resolve("out");
         int detail = 7;
-        Run run = run("analyse", design.toString(), "--out", out.toString(), "--detail",
+        CommandLineTest.Run run = CommandLineTest.run("analyse", design.toString(), "--out", out.toString(), "--detail",
                 Integer.toString(detail), "--policy", "high-reliability", "-q");
         int status = run.status();
-        assertTrue(status == ExitCodes.PASS || status == ExitCodes.VIOLATION, run.stderr());
+        assertTrue(status == ExitCodes.PASS || status == ExitCodes.VIOLATION, run.err());
         LoadedDesign loaded = DesignLoader.load(design);
         List<String> ids = loaded.board().positions().stream().map(p -> p.id()).toList();
 
@@ -218,7 +215,7 @@ class LargeBoardEndToEndTest {
                 assertEquals(positions.get(i).get("detailed").asBoolean(), charted.contains(ids.get(i)), ids.get(i));
             }
         }
-        String table = run.stdout();
+        String table = run.out();
         assertTrue(table.contains("… and " + (POSITIONS - detail) + " more positions"), table);
         assertEquals(detail + 3, table.lines().takeWhile(l -> !l.startsWith("…")).count(),
                 "title, header, rule and one row per detailed position before the count of the rest");
@@ -235,9 +232,9 @@ class LargeBoardEndToEndTest {
         int n = 1000;
         Path big = LargeBoardGenerator.write(n, 1, LargeBoardGenerator.demoParts(), tmp.resolve("board-1000.yaml"));
         Path out = tmp.resolve("out-1000");
-        Run run = run("analyse", big.toString(), "--out", out.toString(), "-q");
+        CommandLineTest.Run run = CommandLineTest.run("analyse", big.toString(), "--out", out.toString(), "-q");
         JsonNode root = new ObjectMapper().readTree(out.resolve("results.json").toFile());
-        assertEquals(ExitCodes.of(Verdict.valueOf(root.get("verdict").asText())), run.status(), run.stderr());
+        assertEquals(ExitCodes.of(Verdict.valueOf(root.get("verdict").asText())), run.status(), run.err());
         JsonNode positions = root.get("positions");
         assertEquals(n, positions.size());
         List<String> ids = DesignLoader.load(big).board().positions().stream().map(p -> p.id()).toList();
@@ -257,20 +254,6 @@ class LargeBoardEndToEndTest {
         for (String id : ids) {
             assertEquals(LargeBoardGenerator.SWEEP_POINTS, ambientsOf.get(id).size(), id + " at every ambient");
         }
-        assertTrue(run.stdout().contains("… and " + (n - ReportDetail.DEFAULT_LIMIT) + " more positions"));
-    }
-
-    /** What one command-line run printed and returned. */
-    private record Run(int status, String stdout, String stderr) {
-    }
-
-    private static Run run(String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter stdout = new StringWriter();
-        StringWriter stderr = new StringWriter();
-        cl.setOut(new PrintWriter(stdout));
-        cl.setErr(new PrintWriter(stderr));
-        int status = cl.execute(args);
-        return new Run(status, stdout.toString(), stderr.toString());
+        assertTrue(run.out().contains("… and " + (n - ReportDetail.DEFAULT_LIMIT) + " more positions"));
     }
 }

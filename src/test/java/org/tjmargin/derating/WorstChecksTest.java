@@ -1,6 +1,7 @@
 package org.tjmargin.derating;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
 import java.util.EnumMap;
@@ -65,6 +66,6 @@ class WorstChecksTest {
                 }
             }
         }
-        assertEquals(true, compared > 5000, "only " + compared + " rule checks compared");
+        assertTrue(compared > 5000, "only " + compared + " rule checks compared");
     }
 }
