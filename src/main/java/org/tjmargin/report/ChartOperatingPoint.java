@@ -52,17 +52,9 @@ final class ChartOperatingPoint {
             Optional<OperatingPoint> hot = p.hottest().flatMap(CornerPoint::point);
             tj.add(x, hot.isPresent() ? (Number) ChartData.celsius(hot.get().tjK()) : null);
             power.add(x, hot.isPresent() ? (Number) pScale.apply(hot.get().diodePowerW()) : null);
-            double lo = Double.POSITIVE_INFINITY;
-            double hi = Double.NEGATIVE_INFINITY;
-            for (CornerPoint c : p.corners()) {
-                if (c.point().isPresent()) {
-                    double v = c.point().get().circuit().voltageV();
-                    lo = Math.min(lo, v);
-                    hi = Math.max(hi, v);
-                }
-            }
-            vLow.add(x, Double.isFinite(lo) ? (Number) lo : null);
-            vHigh.add(x, Double.isFinite(hi) ? (Number) hi : null);
+            boolean any = p.envelope().any();
+            vLow.add(x, any ? (Number) p.envelope().outputMinV() : null);
+            vHigh.add(x, any ? (Number) p.envelope().outputMaxV() : null);
         }
 
         NumberAxis ambient = ChartStyle.numberAxis("Ambient temperature (°C)");

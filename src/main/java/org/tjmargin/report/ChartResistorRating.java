@@ -6,7 +6,6 @@ import org.jfree.chart.JFreeChart;
 import org.tjmargin.circuit.SeriesResistor;
 import org.tjmargin.circuit.ShuntRegulatorSpec;
 import org.tjmargin.solve.AnalysisResult;
-import org.tjmargin.solve.CornerPoint;
 import org.tjmargin.solve.PositionAtAmbient;
 import org.tjmargin.solve.PositionSpec;
 import org.tjmargin.units.Dimension;
@@ -38,14 +37,8 @@ final class ChartResistorRating {
         List<ChartRating.Dot> dots = new ArrayList<>();
         ChartRating.Dot last = null;
         for (PositionAtAmbient p : sweep) {
-            double worst = -1;
-            for (CornerPoint c : p.corners()) {
-                if (c.point().isPresent()) {
-                    worst = Math.max(worst, c.point().get().circuit().resistorPowerW());
-                }
-            }
-            if (worst >= 0) {
-                ChartRating.Dot d = new ChartRating.Dot(p.tLocalK(), worst);
+            if (p.envelope().any()) {
+                ChartRating.Dot d = new ChartRating.Dot(p.tLocalK(), p.envelope().resistorMaxW());
                 dots.add(d);
                 if (p == sweep.get(sweep.size() - 1)) {
                     last = d;

@@ -96,8 +96,8 @@ final class HtmlPositionView {
         return new HtmlView.Position(pr.id(), anchor, badge(pr.verdict()), summary, partFacts(), mountingFacts(),
                 circuitFacts(), pr.notes(), assumptions(),
                 "Operating points at the design's highest ambient, " + design + " (air around the part "
-                        + HtmlFormat.temperature(atMax.tLocalK()) + "), " + atMax.corners().size() + " corner"
-                        + (atMax.corners().size() == 1 ? "" : "s") + ".",
+                        + HtmlFormat.temperature(atMax.tLocalK()) + "), " + atMax.cornerCount() + " corner"
+                        + (atMax.cornerCount() == 1 ? "" : "s") + ".",
                 cornerRows(), spec.circuit() instanceof ShuntRegulatorSpec,
                 "Each rule at its worst corner at " + design + " ambient.", marginRows(),
                 "Over the whole range the smallest margin is " + HtmlFormat.margin(pr.worstMargin()) + " (rule "
@@ -132,18 +132,11 @@ final class HtmlPositionView {
     }
 
     private static String outputRange(PositionAtAmbient p) {
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = Double.NEGATIVE_INFINITY;
-        for (CornerPoint c : p.corners()) {
-            if (c.point().isPresent()) {
-                double v = c.point().get().circuit().voltageV();
-                lo = Math.min(lo, v);
-                hi = Math.max(hi, v);
-            }
-        }
-        if (!Double.isFinite(lo)) {
+        if (!p.envelope().any()) {
             return HtmlFormat.NONE;
         }
+        double lo = p.envelope().outputMinV();
+        double hi = p.envelope().outputMaxV();
         return lo == hi ? HtmlFormat.si(lo, Dimension.VOLTAGE)
                 : HtmlFormat.si(lo, Dimension.VOLTAGE) + " … " + HtmlFormat.si(hi, Dimension.VOLTAGE);
     }

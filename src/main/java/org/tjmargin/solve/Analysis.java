@@ -34,8 +34,13 @@ public final class Analysis {
             map = AirMap.of(prepared, settings, r);
         } else {
             // Without coupling every ambient is an independent pure solve: they run on all cores.
-            sweep = java.util.Arrays.stream(board.ambient().temperaturesK()).parallel()
-                    .mapToObj(t -> BoardSolver.solveAt(prepared, policy, t, settings)).toList();
+            double[] ambients = board.ambient().temperaturesK();
+            sweep = java.util.stream.IntStream.range(0, ambients.length).parallel()
+                    .mapToObj(a -> {
+                        BoardAtAmbient b = BoardSolver.solveAt(prepared, policy, ambients[a], settings);
+                        // Below the highest ambient a position keeps only its reported corners.
+                        return a == ambients.length - 1 ? b : b.reportedOnly();
+                    }).toList();
             map = AirMap.fixed(prepared, settings, sweep);
         }
         // Every position's search is a pure function of the sweep and the map (whose answers do not depend on the

@@ -18,4 +18,10 @@ public record BoardAtAmbient(double ambientK, double enclosureRiseK, double boar
     public BoardAtAmbient {
         positions = List.copyOf(positions);
     }
+
+    /** The board with each position keeping only its reported corners ({@link PositionAtAmbient#reportedOnly()}). */
+    public BoardAtAmbient reportedOnly() {
+        return new BoardAtAmbient(ambientK, enclosureRiseK, boardHeatW,
+                positions.stream().map(PositionAtAmbient::reportedOnly).toList(), couplingEvaluations, status);
+    }
 }

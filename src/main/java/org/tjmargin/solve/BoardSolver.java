@@ -67,8 +67,7 @@ public final class BoardSolver {
         if (air.status() == PointStatus.CONVERGED) {
             return p;
         }
-        return new PositionAtAmbient(p.positionId(), p.ambientK(), p.tLocalK(), p.corners(), p.hottestIndex(),
-                p.leastCurrentIndex(), p.worst(), p.margin(), p.limitingRuleId(), p.status().worse(air.status()));
+        return p.withStatus(p.status().worse(air.status()));
     }
 
     /**

@@ -122,7 +122,11 @@ final class CoupledSweep {
         Pass previous = null;
         // The rises of the last consecutive converged ambients, for the predictor.
         List<double[]> recent = new ArrayList<>();
-        for (double ta : board.board().ambient().temperaturesK()) {
+        double[] ambients = board.board().ambient().temperaturesK();
+        for (int a = 0; a < ambients.length; a++) {
+            double ta = ambients[a];
+            // Below the highest ambient a position keeps only its reported corners (PositionAtAmbient).
+            boolean highest = a == ambients.length - 1;
             int evaluations = 0;
             Pass pass;
             double rise0;
@@ -180,6 +184,7 @@ final class CoupledSweep {
             List<PositionAtAmbient> positions = IntStream.range(0, board.instances().size()).parallel()
                     .mapToObj(i -> BoardSolver.evaluate(board.board().positions().get(i), board.instances().get(i),
                             policy, ta, tLocal, settings, at.outcomes().get(i)))
+                    .map(p -> highest ? p : p.reportedOnly())
                     .toList();
             PointStatus status = air;
             for (PositionAtAmbient p : positions) {

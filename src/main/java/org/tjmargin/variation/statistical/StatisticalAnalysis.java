@@ -6,11 +6,9 @@ import java.util.stream.IntStream;
 import org.tjmargin.derating.Policy;
 import org.tjmargin.solve.AnalysisResult;
 import org.tjmargin.solve.BoardAtAmbient;
-import org.tjmargin.solve.CornerPoint;
 import org.tjmargin.solve.PositionAtAmbient;
 import org.tjmargin.solve.PositionSpec;
 import org.tjmargin.solve.SolverSettings;
-import org.tjmargin.solve.ThermalOutcome;
 import org.tjmargin.variation.VariationModel;
 
 /**
@@ -127,16 +125,8 @@ public final class StatisticalAnalysis {
     }
 
     private static CornerExtremes extremes(PositionAtAmbient at) {
-        double lo = Double.NaN;
-        double hi = Double.NaN;
-        for (CornerPoint c : at.corners()) {
-            if (c.outcome() instanceof ThermalOutcome.Converged cv) {
-                double tj = cv.point().tjK();
-                lo = Double.isNaN(lo) ? tj : Math.min(lo, tj);
-                hi = Double.isNaN(hi) ? tj : Math.max(hi, tj);
-            }
-        }
-        return new CornerExtremes(lo, hi, at.margin(), at.limitingRuleId(), at.corners().size());
+        return new CornerExtremes(at.envelope().tjMinK(), at.envelope().tjMaxK(), at.margin(), at.limitingRuleId(),
+                at.cornerCount());
     }
 
     /** Shared progress count. */

@@ -1,0 +1,51 @@
+package org.tjmargin.solve;
+
+import java.util.List;
+
+/**
+ * What a position's corners span at one ambient, over its converged corners: the junction temperatures, the output
+ * voltage, the series resistor's dissipation and the heat (diode plus resistor) of the corner of greatest heat. Kept
+ * beside the reported corners so that a sweep need not keep every corner at every ambient
+ * ({@link PositionAtAmbient#reportedOnly()}). Each value is {@code NaN} when no corner converged.
+ *
+ * @param tjMinK       coolest junction (K)
+ * @param tjMaxK       hottest junction (K)
+ * @param outputMinV   lowest diode (output) voltage (V)
+ * @param outputMaxV   highest diode (output) voltage (V)
+ * @param resistorMaxW largest series-resistor dissipation (W); 0 without a resistor
+ * @param heatMaxW     largest heat, diode plus series resistor (W)
+ */
+public record CornerEnvelope(double tjMinK, double tjMaxK, double outputMinV, double outputMaxV, double resistorMaxW,
+                             double heatMaxW) {
+
+    /** The envelope of {@code corners}' converged points. */
+    public static CornerEnvelope of(List<CornerPoint> corners) {
+        double tjLo = Double.POSITIVE_INFINITY;
+        double tjHi = Double.NEGATIVE_INFINITY;
+        double vLo = Double.POSITIVE_INFINITY;
+        double vHi = Double.NEGATIVE_INFINITY;
+        double rMax = Double.NEGATIVE_INFINITY;
+        double hMax = Double.NEGATIVE_INFINITY;
+        for (CornerPoint c : corners) {
+            if (c.outcome() instanceof ThermalOutcome.Converged cv) {
+                OperatingPoint p = cv.point();
+                tjLo = Math.min(tjLo, p.tjK());
+                tjHi = Math.max(tjHi, p.tjK());
+                double v = p.circuit().voltageV();
+                vLo = Math.min(vLo, v);
+                vHi = Math.max(vHi, v);
+                rMax = Math.max(rMax, p.circuit().resistorPowerW());
+                hMax = Math.max(hMax, p.heatW());
+            }
+        }
+        if (tjHi == Double.NEGATIVE_INFINITY) {
+            return new CornerEnvelope(Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+        }
+        return new CornerEnvelope(tjLo, tjHi, vLo, vHi, rMax, hMax);
+    }
+
+    /** True when at least one corner converged. */
+    public boolean any() {
+        return !Double.isNaN(tjMaxK);
+    }
+}

@@ -1,0 +1,81 @@
+package org.tjmargin.solve;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Random;
+import org.junit.jupiter.api.Test;
+import org.tjmargin.derating.Policy;
+import org.tjmargin.design.DesignLoader;
+import org.tjmargin.design.ProfileLoader;
+
+/**
+ * Below the design's highest ambient the sweep keeps only each position's reported corners
+ * ({@link PositionAtAmbient#reportedOnly()}). Held against the full point the board solver gives at the same ambient
+ * ({@link BoardSolver#solveAt}, every corner kept): the same hottest, least-current and worst-per-rule corners, the
+ * same checks, and an envelope equal to the extremes taken over every corner; and the envelope's hottest junction is
+ * the hottest corner's (the hottest corner is chosen by junction temperature).
+ */
+class ReportedCornersTest {
+
+    private static final Policy POLICY = ProfileLoader.shipped("general-commercial").policy().withBuiltInMinimum();
+
+    @Test
+    void theReportedCornersAreTheFullPointsReportedCorners() {
+        Random rnd = new Random(20_261_203L);
+        int compared = 0;
+        int dropped = 0;
+        for (int n = 0; n < 12; n++) {
+            Board board = n == 0 ? DesignLoader.load(Path.of("demo/design.yaml")).board()
+                    : RandomCoupledBoards.draw(rnd, "board " + n);
+            PreparedBoard prepared = PreparedBoard.of(board);
+            double[] ambients = board.ambient().temperaturesK();
+            for (double ta : new double[] {ambients[0], ambients[ambients.length / 2]}) {
+                BoardAtAmbient full = BoardSolver.solveAt(prepared, POLICY, ta, SolverSettings.DEFAULT);
+                BoardAtAmbient kept = full.reportedOnly();
+                for (int i = 0; i < full.positions().size(); i++) {
+                    PositionAtAmbient p = full.positions().get(i);
+                    PositionAtAmbient q = kept.positions().get(i);
+                    String at = "board " + n + " " + p.positionId() + " at " + ta;
+                    assertTrue(p.keepsEveryCorner(), at);
+                    assertEquals(p.cornerCount(), q.cornerCount(), at);
+                    assertEquals(p.hottest(), q.hottest(), at);
+                    assertEquals(p.leastCurrent(), q.leastCurrent(), at);
+                    assertEquals(p.worst().size(), q.worst().size(), at);
+                    for (int r = 0; r < p.worst().size(); r++) {
+                        assertEquals(p.worst().get(r).check(), q.worst().get(r).check(), at);
+                        assertEquals(p.corners().get(p.worst().get(r).cornerIndex()),
+                                q.corners().get(q.worst().get(r).cornerIndex()), at);
+                    }
+                    assertEquals(CornerEnvelope.of(p.corners()), q.envelope(), at);
+                    assertEquals(p.margin(), q.margin(), at);
+                    assertEquals(p.status(), q.status(), at);
+                    q.hottest().flatMap(CornerPoint::point).ifPresent(
+                            hot -> assertEquals(hot.tjK(), q.envelope().tjMaxK(), at));
+                    dropped += p.corners().size() - q.corners().size();
+                    compared++;
+                }
+            }
+        }
+        assertTrue(compared > 50, "only " + compared + " points compared");
+        assertTrue(dropped > 100, "only " + dropped + " corners dropped: the test does not exercise the renumbering");
+    }
+
+    @Test
+    void theSweepKeepsEveryCornerOnlyAtTheHighestAmbient() {
+        for (Board board : List.of(DesignLoader.load(Path.of("demo/design.yaml")).board(),
+                RandomCoupledBoards.draw(new Random(11), "coupled"))) {
+            AnalysisResult r = Analysis.run(board, POLICY, SolverSettings.DEFAULT);
+            for (PositionAtAmbient p : r.atMaximumAmbient().positions()) {
+                assertTrue(p.keepsEveryCorner(), p.positionId());
+            }
+            for (BoardAtAmbient b : r.sweep().subList(0, r.sweep().size() - 1)) {
+                for (PositionAtAmbient p : b.positions()) {
+                    assertTrue(p.corners().size() <= 2 + p.worst().size(), p.positionId() + " at " + b.ambientK());
+                }
+            }
+        }
+    }
+}
