@@ -50,13 +50,20 @@ public final class SweepCsv {
     private static String rows(BoardAtAmbient b) {
         StringBuilder out = new StringBuilder(256 * 2 * b.positions().size());
         try (CSVPrinter csv = new CSVPrinter(out, FORMAT)) {
+            // The ambient, the enclosure's rise and (in a sealed box) the air are the same on every row of an
+            // ambient: each is written once and its text reused.
+            Repeated ambient = new Repeated();
+            Repeated air = new Repeated();
+            String rise = num(b.enclosureRiseK());
             for (PositionAtAmbient p : b.positions()) {
                 boolean same = p.hottestIndex() == p.leastCurrentIndex();
+                String amb = ambient.num(Labels.celsius(p.ambientK()));
+                String local = air.num(Labels.celsius(p.tLocalK()));
                 if (p.hottest().isPresent()) {
-                    row(csv, b, p, same ? "hottest,least-current" : "hottest", p.hottest().get());
+                    row(csv, amb, local, rise, p, same ? "hottest,least-current" : "hottest", p.hottest().get());
                 }
                 if (!same && p.leastCurrent().isPresent()) {
-                    row(csv, b, p, "least-current", p.leastCurrent().get());
+                    row(csv, amb, local, rise, p, "least-current", p.leastCurrent().get());
                 }
             }
         } catch (IOException e) {
@@ -66,11 +73,24 @@ public final class SweepCsv {
         return out.toString();
     }
 
-    private static void row(CSVPrinter csv, BoardAtAmbient b, PositionAtAmbient p, String role, CornerPoint c)
-            throws IOException {
+    /** The text of the last number written, reused while the same number comes again. */
+    private static final class Repeated {
+        private double last = Double.NaN;
+        private String text;
+
+        String num(double v) {
+            if (text == null || Double.doubleToRawLongBits(v) != Double.doubleToRawLongBits(last)) {
+                last = v;
+                text = SweepCsv.num(v);
+            }
+            return text;
+        }
+    }
+
+    private static void row(CSVPrinter csv, String ambientC, String tLocalC, String riseK, PositionAtAmbient p,
+                            String role, CornerPoint c) throws IOException {
         OperatingPoint op = c.point().orElse(null);
-        csv.printRecord(p.positionId(), num(Labels.celsius(p.ambientK())), num(Labels.celsius(p.tLocalK())),
-                num(b.enclosureRiseK()), c.status().name(), num(p.margin()), p.limitingRuleId(), role,
+        csv.printRecord(p.positionId(), ambientC, tLocalC, riseK, c.status().name(), num(p.margin()), p.limitingRuleId(), role,
                 c.corner().label(),
                 op == null ? "" : num(Labels.celsius(op.tjK())), op == null ? "" : num(Labels.celsius(op.referenceK())),
                 op == null ? "" : num(op.circuit().voltageV()), op == null ? "" : num(op.circuit().diodeCurrentA()),

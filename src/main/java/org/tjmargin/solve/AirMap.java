@@ -125,12 +125,8 @@ final class AirMap implements AutoCloseable {
                     allG += perKelvinW[i];
                 }
             }
-            Integer[] order = new Integer[diodeW.length];
-            for (int i = 0; i < order.length; i++) {
-                order[i] = i;
-            }
-            Arrays.sort(order, (a, b) -> Double.compare(diodeW[b], diodeW[a]));
-            int k = Math.min(FLOOR_TERMS, order.length);
+            int[] order = largestFirst(diodeW, FLOOR_TERMS);
+            int k = order.length;
             double[] p = new double[k];
             double[] g = new double[k];
             for (int i = 0; i < k; i++) {
@@ -138,6 +134,31 @@ final class AirMap implements AutoCloseable {
                 g[i] = perKelvinW[order[i]];
             }
             return new HeatFloor(constant, p, g, allP, allG);
+        }
+
+        /**
+         * The indices of the {@code k} largest values (fewer if there are fewer), largest first, equal values in
+         * index order: the first {@code k} of a stable sort by {@code Double.compare}, descending, in one pass with
+         * no boxing (a board of a thousand positions needs only the top few).
+         */
+        static int[] largestFirst(double[] values, int k) {
+            int[] top = new int[Math.min(k, values.length)];
+            int size = 0;
+            for (int i = 0; i < values.length; i++) {
+                // After every kept index whose value is not less than this one (those kept came earlier).
+                int at = size;
+                while (at > 0 && Double.compare(values[top[at - 1]], values[i]) < 0) {
+                    at--;
+                }
+                if (at >= top.length) {
+                    continue;
+                }
+                int last = Math.min(size, top.length - 1);
+                System.arraycopy(top, at, top, at + 1, last - at);
+                top[at] = i;
+                size = Math.min(size + 1, top.length);
+            }
+            return top;
         }
     }
 
