@@ -90,8 +90,8 @@ public final class SweepCsv {
     private static void row(CSVPrinter csv, String ambientC, String tLocalC, String riseK, PositionAtAmbient p,
                             String role, CornerPoint c) throws IOException {
         OperatingPoint op = c.point().orElse(null);
-        csv.printRecord(p.positionId(), ambientC, tLocalC, riseK, c.status().name(), num(p.margin()), p.limitingRuleId(), role,
-                c.corner().label(),
+        csv.printRecord(p.positionId(), ambientC, tLocalC, riseK, c.status().name(), num(p.margin()),
+                p.limitingRuleId(), role, c.corner().label(),
                 op == null ? "" : num(Labels.celsius(op.tjK())), op == null ? "" : num(Labels.celsius(op.referenceK())),
                 op == null ? "" : num(op.circuit().voltageV()), op == null ? "" : num(op.circuit().diodeCurrentA()),
                 op == null ? "" : num(op.diodePowerW()), op == null ? "" : num(op.circuit().resistorPowerW()),

@@ -1,5 +1,7 @@
 package org.tjmargin.solve;
 
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import org.tjmargin.derating.Rule;
@@ -61,13 +63,13 @@ public record PositionAtAmbient(String positionId, double ambientK, double tLoca
     public PositionAtAmbient reportedOnly() {
         int n = corners.size();
         int[] renumbered = new int[n];
-        java.util.Arrays.fill(renumbered, -1);
+        Arrays.fill(renumbered, -1);
         mark(renumbered, hottestIndex);
         mark(renumbered, leastCurrentIndex);
         for (WorstCheck w : worst) {
             mark(renumbered, w.cornerIndex());
         }
-        List<CornerPoint> kept = new java.util.ArrayList<>();
+        List<CornerPoint> kept = new ArrayList<>();
         for (int k = 0; k < n; k++) {
             if (renumbered[k] >= 0) {
                 renumbered[k] = kept.size();
@@ -77,7 +79,7 @@ public record PositionAtAmbient(String positionId, double ambientK, double tLoca
         if (kept.size() == n) {
             return this;
         }
-        List<WorstCheck> w2 = new java.util.ArrayList<>(worst.size());
+        List<WorstCheck> w2 = new ArrayList<>(worst.size());
         for (WorstCheck w : worst) {
             w2.add(new WorstCheck(w.check(), renumbered[w.cornerIndex()]));
         }
