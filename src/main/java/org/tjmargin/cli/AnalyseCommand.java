@@ -156,7 +156,7 @@ public final class AnalyseCommand implements Callable<Integer> {
             charts = ChartSet.render(result, stats, ChartSize.DEFAULT, detailed);
             OutputFiles files = new OutputFiles()
                     .text("results.json", resultsJson)
-                    .text("sweep.csv", SweepCsv.render(result))
+                    .pieces("sweep.csv", SweepCsv.renderUtf8(result))
                     .text("report.html", HtmlReport.render(result, stats, provenance, charts, detailed));
             if (stats.isPresent()) {
                 files.text("spread.csv", StatisticsCsv.spread(stats.get()))
@@ -164,7 +164,7 @@ public final class AnalyseCommand implements Callable<Integer> {
                         .text("sensitivity.csv", StatisticsCsv.sensitivity(result, stats.get()));
             }
             for (RenderedChart c : charts) {
-                files.bytes(c.pngFileName(), c.png()).text(c.svgFileName(), c.svg());
+                files.pieces(c.pngFileName(), List.of(c.png())).text(c.svgFileName(), c.svg());
             }
             progress.phase("writing");
             List<Path> inputs = allInputs.stream().map(InputFile::path).toList();

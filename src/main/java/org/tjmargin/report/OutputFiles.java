@@ -1,6 +1,7 @@
 package org.tjmargin.report;
 
 import java.io.IOException;
+import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
@@ -18,19 +19,33 @@ import java.util.Map;
  */
 public final class OutputFiles {
 
-    private final Map<String, byte[]> files = new LinkedHashMap<>();
+    /** Each file as the pieces written one after another. */
+    private final Map<String, List<byte[]>> files = new LinkedHashMap<>();
 
     /** Adds a text file (UTF-8). */
     public OutputFiles text(String name, String content) {
-        return bytes(name, content.getBytes(StandardCharsets.UTF_8));
+        return put(name, List.of(content.getBytes(StandardCharsets.UTF_8)));
     }
 
-    /** Adds a binary file. */
+    /** Adds a binary file (a copy of {@code content}). */
     public OutputFiles bytes(String name, byte[] content) {
+        return put(name, List.of(content.clone()));
+    }
+
+    /**
+     * Adds a file made of {@code pieces} written one after another, kept as they are (not copied: the caller does
+     * not change them afterwards). A large file (a big board's {@code sweep.csv} is tens of megabytes) is then never
+     * held joined in memory.
+     */
+    public OutputFiles pieces(String name, List<byte[]> pieces) {
+        return put(name, List.copyOf(pieces));
+    }
+
+    private OutputFiles put(String name, List<byte[]> pieces) {
         if (name.contains("/") || name.contains("\\") || name.startsWith(".")) {
             throw new IllegalArgumentException("output names are plain file names, got " + name);
         }
-        files.put(name, content.clone());
+        files.put(name, pieces);
         return this;
     }
 
@@ -63,11 +78,15 @@ public final class OutputFiles {
     /** Writes every file into {@code dir} (created if missing), each atomically. */
     public void writeTo(Path dir) throws IOException {
         Files.createDirectories(dir);
-        for (Map.Entry<String, byte[]> e : files.entrySet()) {
+        for (Map.Entry<String, List<byte[]>> e : files.entrySet()) {
             Path target = dir.resolve(e.getKey());
             Path tmp = Files.createTempFile(dir, "." + e.getKey() + ".", ".part");
             try {
-                Files.write(tmp, e.getValue());
+                try (OutputStream os = Files.newOutputStream(tmp)) {
+                    for (byte[] piece : e.getValue()) {
+                        os.write(piece);
+                    }
+                }
                 try {
                     Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
                 } catch (AtomicMoveNotSupportedException ex) {

@@ -1,7 +1,10 @@
 package org.tjmargin.report;
 
+import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
 import java.util.List;
 import com.fasterxml.jackson.core.io.NumberOutput;
 import org.apache.commons.csv.CSVFormat;
@@ -29,21 +32,32 @@ public final class SweepCsv {
     }
 
     /**
-     * Renders the sweep. The ambients are rendered on all cores, each into its own buffer, and joined in order: the
-     * text is the one a single printer writes (a board of a thousand positions has two hundred thousand rows).
+     * Renders the sweep as text: the pieces of {@link #renderUtf8(AnalysisResult)} joined and read back.
      */
     public static String render(AnalysisResult r) {
+        List<byte[]> pieces = renderUtf8(r);
+        int length = pieces.stream().mapToInt(b -> b.length).sum();
+        ByteArrayOutputStream all = new ByteArrayOutputStream(length);
+        pieces.forEach(all::writeBytes);
+        return all.toString(StandardCharsets.UTF_8);
+    }
+
+    /**
+     * Renders the sweep as UTF-8, the header and then one piece per ambient, to be written one after another. The
+     * ambients are rendered on all cores, each into its own buffer: the text is the one a single printer writes (a
+     * board of a thousand positions has two hundred thousand rows, some 50 MB, which are never held joined).
+     */
+    public static List<byte[]> renderUtf8(AnalysisResult r) {
         StringBuilder out = new StringBuilder();
         try (CSVPrinter csv = new CSVPrinter(out, FORMAT.builder().setHeader(HEADER).get())) {
             csv.flush();
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
-        List<String> parts = r.sweep().parallelStream().map(SweepCsv::rows).toList();
-        int length = out.length() + parts.stream().mapToInt(String::length).sum();
-        StringBuilder all = new StringBuilder(length).append(out);
-        parts.forEach(all::append);
-        return all.toString();
+        List<byte[]> pieces = new ArrayList<>(r.sweep().size() + 1);
+        pieces.add(out.toString().getBytes(StandardCharsets.UTF_8));
+        pieces.addAll(r.sweep().parallelStream().map(b -> rows(b).getBytes(StandardCharsets.UTF_8)).toList());
+        return pieces;
     }
 
     /** The rows of one ambient, without the header. */

@@ -157,8 +157,13 @@ public final class ClampTransient {
         }
 
         private FosterStep stepFor(double h) {
-            if (h != cachedH) {
-                cachedStep = network.step(h);
+            if (cachedStep == null) {
+                cachedStep = FosterStep.reusable(network, h);
+                cachedH = h;
+            } else if (h != cachedH) {
+                // Recomputed in place: the step changes at almost every step, and a new one each time was most of
+                // the transient's garbage.
+                cachedStep.relength(h);
                 cachedH = h;
             }
             return cachedStep;

@@ -23,28 +23,70 @@ package org.tjmargin.thermal;
  * {@code z/2 − z²/6 + z³/24 − z⁴/120} ({@code z = h/τ}) because {@code 1 − (1 − E)/z} cancels badly there; the
  * series' truncation error is below {@code z⁵/720}, under 1e-15 of the term.
  *
- * <p>Immutable and thread-safe. Create with {@link FosterNetwork#step(double)}.
+ * <p>Immutable and thread-safe when made by {@link FosterNetwork#step(double)}; a solver that changes its step
+ * length at every step keeps one {@link #reusable(FosterNetwork, double)} step of its own instead.
  */
 public final class FosterStep {
 
     /** Below this {@code h/τ}, the weight {@code 1 − g} comes from its Taylor series (see class comment). */
     private static final double SERIES_LIMIT = 1e-3;
 
-    private final double hS;
+    private final double[] rKPerW;
+    private final double[] tauS;
+    /** True for a step that {@link #relength(double)} may recompute; never shared then. */
+    private final boolean reusable;
     private final double[] decay;
     private final double[] startWeightKPerW;
     private final double[] endWeightKPerW;
-    private final double endPowerGainKPerW;
+    private double hS;
+    private double endPowerGainKPerW;
 
     FosterStep(double[] rKPerW, double[] tauS, double hS) {
-        if (!(hS >= 0) || !Double.isFinite(hS)) {
-            throw new IllegalArgumentException("Foster step length must be finite and not negative: hS = " + hS);
-        }
+        this(rKPerW, tauS, hS, false);
+    }
+
+    private FosterStep(double[] rKPerW, double[] tauS, double hS, boolean reusable) {
         int n = rKPerW.length;
-        this.hS = hS;
+        this.rKPerW = rKPerW;
+        this.tauS = tauS;
+        this.reusable = reusable;
         decay = new double[n];
         startWeightKPerW = new double[n];
         endWeightKPerW = new double[n];
+        compute(hS);
+    }
+
+    /**
+     * A step of {@code network}'s stages that {@link #relength(double)} recomputes in place, so that a solver that
+     * changes its step at every step allocates nothing per step. Not thread-safe: for one solver's own use.
+     *
+     * @param hS the first length (s)
+     */
+    public static FosterStep reusable(FosterNetwork network, double hS) {
+        return new FosterStep(network.resistancesKPerW(), network.timeConstantsS(), hS, true);
+    }
+
+    /**
+     * This step recomputed for a new length, in place: the same numbers as {@link FosterNetwork#step(double)} for
+     * that length.
+     *
+     * @return this step
+     * @throws IllegalStateException for a step not made by {@link #reusable(FosterNetwork, double)}
+     */
+    public FosterStep relength(double hS) {
+        if (!reusable) {
+            throw new IllegalStateException("this Foster step is shared and immutable; make one with reusable()");
+        }
+        compute(hS);
+        return this;
+    }
+
+    private void compute(double hS) {
+        if (!(hS >= 0) || !Double.isFinite(hS)) {
+            throw new IllegalArgumentException("Foster step length must be finite and not negative: hS = " + hS);
+        }
+        this.hS = hS;
+        int n = rKPerW.length;
         double gain = 0;
         for (int i = 0; i < n; i++) {
             double z = hS / tauS[i];

@@ -1,6 +1,7 @@
 package org.tjmargin.thermal;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -24,6 +25,31 @@ class FosterNetworkTest {
             assertEquals(expected, s.totalRiseK(), 1e-13 * expected, "t = " + t);
             assertEquals(expected / 2.0, one.zthKPerW(t), 1e-13 * expected);
         }
+    }
+
+    @Test
+    void aReusedStepGivesTheFreshStepsNumbersBitForBit() {
+        // Seeded loop: a step recomputed in place (the surge transient's own step) against a fresh step of the same
+        // length, over step lengths from far below to far above the time constants, on both sides of the series
+        // limit. The closed form itself is held against the analytic step and ramp responses above.
+        FosterNetwork net = FosterNetwork.of(new double[] {0.2, 1.5, 8.0, 30.0}, new double[] {2e-6, 1e-4, 5e-3, 2.0});
+        Random rnd = new Random(20261202L);
+        FosterStep reused = FosterStep.reusable(net, 1e-6);
+        for (int n = 0; n < 2000; n++) {
+            double h = Math.pow(10, -9 + 10 * rnd.nextDouble());
+            FosterStep fresh = net.step(h);
+            assertSame(reused, reused.relength(h));
+            assertEquals(fresh.lengthS(), reused.lengthS(), 0.0);
+            assertEquals(fresh.endPowerGainKPerW(), reused.endPowerGainKPerW(), 0.0);
+            double[] x = {0.1, -0.3, 2.0, 5.0};
+            double[] y = x.clone();
+            fresh.advanceInPlace(x, 1.5, 0.25);
+            reused.advanceInPlace(y, 1.5, 0.25);
+            for (int i = 0; i < x.length; i++) {
+                assertEquals(x[i], y[i], 0.0, "stage " + i + " at h = " + h);
+            }
+        }
+        assertThrows(IllegalStateException.class, () -> net.step(1e-3).relength(2e-3));
     }
 
     @Test
