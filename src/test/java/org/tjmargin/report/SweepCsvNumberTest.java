@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.SplittableRandom;
+import org.apache.commons.csv.CSVFormat;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -25,6 +26,34 @@ class SweepCsvNumberTest {
             String s = SweepCsv.num(v);
             assertEquals(v, Double.parseDouble(s), 0.0, s);
             assertTrue(digits(s) <= digits(Double.toString(v)), s + " against " + Double.toString(v));
+        }
+    }
+
+    /**
+     * {@code SweepCsv} writes its numbers after their delimiter without the format's quoting scan; this holds that
+     * Commons CSV's RFC 4180 printing (what a {@code CSVPrinter} does per value) leaves every such number unquoted,
+     * as first field and after one, including the non-finite ones.
+     */
+    @Test
+    void numbersNeedNoQuotesInRfc4180() throws Exception {
+        SplittableRandom rnd = new SplittableRandom(4180L);
+        CSVFormat format = CSVFormat.RFC4180;
+        for (int i = 0; i < 100_000; i++) {
+            double v = switch (i) {
+                case 0 -> Double.NaN;
+                case 1 -> Double.POSITIVE_INFINITY;
+                case 2 -> Double.NEGATIVE_INFINITY;
+                case 3 -> -0.0;
+                default -> i % 2 == 0 ? Double.longBitsToDouble(rnd.nextLong())
+                        : (rnd.nextDouble() - 0.5) * Math.pow(10, rnd.nextInt(-12, 6));
+            };
+            String s = SweepCsv.num(v);
+            StringBuilder after = new StringBuilder();
+            format.print(s, after, false);
+            assertEquals("," + s, after.toString());
+            StringBuilder first = new StringBuilder();
+            format.print(s, first, true);
+            assertEquals(s, first.toString());
         }
     }
 
