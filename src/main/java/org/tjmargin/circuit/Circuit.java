@@ -4,7 +4,8 @@ import org.tjmargin.device.BreakdownDiode;
 import org.tjmargin.device.PreparedDiode;
 
 /**
- * A circuit around one breakdown diode. Implementations are immutable values; {@link #at} is a pure function.
+ * A circuit around one breakdown diode. Implementations are immutable values; {@link #at} is a pure function
+ * and {@link #solve} its allocation-free form.
  */
 public interface Circuit {
 
@@ -27,6 +28,20 @@ public interface Circuit {
      * @param tjK   junction temperature (K)
      * @return the operating point
      */
-    CircuitPoint at(PreparedDiode diode, double tjK);
+    default CircuitPoint at(PreparedDiode diode, double tjK) {
+        CircuitState s = new CircuitState();
+        solve(diode, tjK, s);
+        return s.point();
+    }
+
+    /**
+     * The same written into {@code out} instead of a new point: what the junction searches call at every
+     * evaluation, so that only the point at the root is allocated.
+     *
+     * @param diode the diode, prepared
+     * @param tjK   junction temperature (K)
+     * @param out   receives the operating point
+     */
+    void solve(PreparedDiode diode, double tjK, CircuitState out);
 
 }

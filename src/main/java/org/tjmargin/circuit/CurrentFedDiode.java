@@ -16,7 +16,7 @@ public record CurrentFedDiode(double currentA) implements Circuit {
     }
 
     @Override
-    public CircuitPoint at(PreparedDiode diode, double tjK) {
+    public void solve(PreparedDiode diode, double tjK, CircuitState out) {
         // The total reverse current rises monotonically with voltage: bisection for the voltage that carries the
         // feed current, between 0 and the voltage the breakdown branch alone would need (200 halvings reach
         // double resolution).
@@ -24,7 +24,8 @@ public record CurrentFedDiode(double currentA) implements Circuit {
             // The usual case, on the breakdown characteristic itself: closed form or the knee law, no search.
             double v = diode.breakdownVoltageV(currentA, tjK);
             Region region = currentA >= diode.lineStartA() ? Region.BREAKDOWN : Region.KNEE;
-            return new CircuitPoint(v, currentA, v * currentA, 0.0, 0.0, region);
+            out.set(v, currentA, v * currentA, 0.0, 0.0, region);
+            return;
         }
         double lo = 0;
         double hi = Math.max(diode.breakdownVoltageV(Math.max(currentA, diode.izkA()), tjK), 1e-9);
@@ -46,6 +47,6 @@ public record CurrentFedDiode(double currentA) implements Circuit {
         } else {
             region = (v - diode.vz0V(tjK)) / diode.rzOhm() >= diode.lineStartA() ? Region.BREAKDOWN : Region.KNEE;
         }
-        return new CircuitPoint(v, currentA, v * currentA, 0.0, 0.0, region);
+        out.set(v, currentA, v * currentA, 0.0, 0.0, region);
     }
 }

@@ -28,7 +28,7 @@ public record ShuntRegulator(double supplyV, double seriesOhm, Load load) implem
     }
 
     @Override
-    public CircuitPoint at(PreparedDiode diode, double tjK) {
+    public void solve(PreparedDiode diode, double tjK, CircuitState out) {
         double vth;
         double rth;
         if (load instanceof Load.Resistive r) {
@@ -38,12 +38,12 @@ public record ShuntRegulator(double supplyV, double seriesOhm, Load load) implem
             vth = supplyV - ((Load.Current) load).currentA() * seriesOhm;
             rth = seriesOhm;
         }
-        double[] s = TheveninDrive.solve(diode, tjK, vth, rth);
-        double v = s[0];
-        double iz = s[1];
+        TheveninDrive.solve(diode, tjK, vth, rth, out);
+        double v = out.voltageV();
+        double iz = out.diodeCurrentA();
         double drop = supplyV - v;
         double il = load instanceof Load.Resistive r ? v / r.resistanceOhm() : Math.max(0.0, drop / seriesOhm - iz);
-        return new CircuitPoint(v, iz, v * iz, drop * drop / seriesOhm, il, Region.ofOrdinal((int) s[2]));
+        out.set(v, iz, v * iz, drop * drop / seriesOhm, il, out.region());
     }
 
 

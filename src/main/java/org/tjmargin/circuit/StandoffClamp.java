@@ -23,10 +23,11 @@ public record StandoffClamp(double lineV, double sourceOhm) implements Circuit {
     }
 
     @Override
-    public CircuitPoint at(PreparedDiode diode, double tjK) {
-        double[] s = TheveninDrive.solve(diode, tjK, lineV, sourceOhm);
-        double i = s[1];
-        return new CircuitPoint(s[0], i, s[0] * i, i * i * sourceOhm, 0.0, Region.ofOrdinal((int) s[2]));
+    public void solve(PreparedDiode diode, double tjK, CircuitState out) {
+        TheveninDrive.solve(diode, tjK, lineV, sourceOhm, out);
+        double v = out.voltageV();
+        double i = out.diodeCurrentA();
+        out.set(v, i, v * i, i * i * sourceOhm, 0.0, out.region());
     }
 
 }

@@ -22,40 +22,42 @@ final class TheveninDrive {
     }
 
     /**
-     * Diode voltage and current against the source.
-     *
-     * @return {@code {voltageV, currentA, regionOrdinal}}
+     * Diode voltage and current against the source, written into {@code out}'s voltage, current and region (the
+     * circuit adds its own share).
      */
-    static double[] solve(PreparedDiode d, double tjK, double vthV, double rthOhm) {
+    static void solve(PreparedDiode d, double tjK, double vthV, double rthOhm, CircuitState out) {
         double g = d.excessLeakageConductanceS(tjK);
         if (rthOhm == 0) {
             double v = Math.max(0.0, vthV);
-            return new double[] {v, d.reverseCurrentA(v, tjK), regionAt(d, tjK, v)};
+            out.drive(v, d.reverseCurrentA(v, tjK), regionAt(d, tjK, v));
+            return;
         }
         if (g > 0) {
             // Excess leakage is a conductance across the diode: fold it into the source (Norton–Thevenin), solve
             // the remaining characteristic, and add its current back.
             double vth2 = vthV / (1 + g * rthOhm);
             double rth2 = rthOhm / (1 + g * rthOhm);
-            double[] s = solveCharacteristic(d, tjK, vth2, rth2);
-            s[1] += g * s[0];
-            return s;
+            solveCharacteristic(d, tjK, vth2, rth2, out);
+            out.drive(out.voltageV(), out.diodeCurrentA() + g * out.voltageV(), out.region());
+            return;
         }
-        return solveCharacteristic(d, tjK, vthV, rthOhm);
+        solveCharacteristic(d, tjK, vthV, rthOhm, out);
     }
 
-    private static double regionAt(PreparedDiode d, double tjK, double v) {
+    private static Region regionAt(PreparedDiode d, double tjK, double v) {
         if (v < d.kneeVoltageV(tjK)) {
-            return Region.BELOW_KNEE.ordinal();
+            return Region.BELOW_KNEE;
         }
-        return (v - d.vz0V(tjK)) / d.rzOhm() >= d.lineStartA() ? Region.BREAKDOWN.ordinal() : Region.KNEE.ordinal();
+        return (v - d.vz0V(tjK)) / d.rzOhm() >= d.lineStartA() ? Region.BREAKDOWN : Region.KNEE;
     }
 
-    private static double[] solveCharacteristic(PreparedDiode d, double tjK, double vthV, double rthOhm) {
+    private static void solveCharacteristic(PreparedDiode d, double tjK, double vthV, double rthOhm,
+                                            CircuitState out) {
         double vz0 = d.vz0V(tjK);
         double lineI = (vthV - vz0) / (rthOhm + d.rzOhm());
         if (lineI >= d.lineStartA()) {
-            return new double[] {vz0 + d.rzOhm() * lineI, lineI, Region.BREAKDOWN.ordinal()};
+            out.drive(vz0 + d.rzOhm() * lineI, lineI, Region.BREAKDOWN);
+            return;
         }
         double izk = d.izkA();
         if (vthV - d.kneeVoltageV(tjK) - rthOhm * izk >= 0) {
@@ -94,10 +96,12 @@ final class TheveninDrive {
                 i = next;
                 v = d.breakdownVoltageV(i, tjK);
             }
-            return new double[] {v, i, Region.KNEE.ordinal()};
+            out.drive(v, i, Region.KNEE);
+            return;
         }
         if (vthV <= 0) {
-            return new double[] {0.0, 0.0, Region.BELOW_KNEE.ordinal()};
+            out.drive(0.0, 0.0, Region.BELOW_KNEE);
+            return;
         }
         // Below the knee: (Vth − V)/Rth − I_sub(V) = 0 for V in [0, min(Vth, Vzk)], decreasing in V.
         double hi = Math.min(vthV, d.kneeVoltageV(tjK));
@@ -110,7 +114,8 @@ final class TheveninDrive {
                 break;
             }
             if (Math.abs(next - v) <= 1e-15 * hi) {
-                return new double[] {next, d.subKneeCurrentA(next, tjK), Region.BELOW_KNEE.ordinal()};
+                out.drive(next, d.subKneeCurrentA(next, tjK), Region.BELOW_KNEE);
+                return;
             }
             v = next;
         }
@@ -124,6 +129,6 @@ final class TheveninDrive {
             }
         }
         v = 0.5 * (lo + hi);
-        return new double[] {v, d.subKneeCurrentA(v, tjK), Region.BELOW_KNEE.ordinal()};
+        out.drive(v, d.subKneeCurrentA(v, tjK), Region.BELOW_KNEE);
     }
 }

@@ -1,6 +1,7 @@
 package org.tjmargin.solve;
 
 import org.tjmargin.circuit.CircuitPoint;
+import org.tjmargin.circuit.CircuitState;
 import org.tjmargin.device.PreparedDiode;
 
 /**
@@ -50,17 +51,19 @@ final class CornerHeat {
         // The instance's prepared constants (equal results, see PreparedDiode); Circuit.at(BreakdownDiode, …) would
         // prepare them at every evaluation.
         final PreparedDiode prepared = inst.prepared();
-        final CircuitPoint[] last = new CircuitPoint[1];
+        // Every evaluation is solved into one state; it holds the last one when the search returns.
+        final CircuitState last = new CircuitState();
         final double[] lastTj = {Double.NaN};
         FixedPointOutcome outcome = LowestFixedPoint.find(tj -> {
-            CircuitPoint cp = inst.circuit().at(prepared, tj);
-            last[0] = cp;
+            inst.circuit().solve(prepared, tj, last);
             lastTj[0] = tj;
-            return ElectroThermalSolver.junctionK(tLocalK, rTheta, cp.diodePowerW());
+            return ElectroThermalSolver.junctionK(tLocalK, rTheta, last.diodePowerW());
         }, tLocalK, settings, false);
         if (outcome instanceof FixedPointOutcome.Root r) {
-            CircuitPoint cp = lastTj[0] == r.x() ? last[0] : inst.circuit().at(prepared, r.x());
-            return new Heat(cp.diodePowerW() + cp.resistorPowerW(), cp.diodePowerW(), PointStatus.CONVERGED);
+            if (lastTj[0] != r.x()) {
+                inst.circuit().solve(prepared, r.x(), last);
+            }
+            return new Heat(last.diodePowerW() + last.resistorPowerW(), last.diodePowerW(), PointStatus.CONVERGED);
         }
         if (outcome instanceof FixedPointOutcome.Runaway) {
             return new Heat(heatAt(inst, settings.capK()), 0.0, PointStatus.RUNAWAY);

@@ -2,6 +2,7 @@ package org.tjmargin.solve;
 
 import org.tjmargin.circuit.Circuit;
 import org.tjmargin.circuit.CircuitPoint;
+import org.tjmargin.circuit.CircuitState;
 import org.tjmargin.device.BreakdownDiode;
 import org.tjmargin.device.PreparedDiode;
 import org.tjmargin.thermal.SteadyThermalPath;
@@ -51,15 +52,16 @@ public final class ElectroThermalSolver {
         final double rTheta = path.rThetaJaKPerW();
         // The circuit points of the last evaluations, so that the point at the root (evaluated just before the two
         // of the loop gain) is not solved again. Local to this call: the solver stays thread-safe.
+        // Each evaluation is solved into the oldest of three states (no point allocated per evaluation).
         final Recent recent = new Recent();
         FixedPointOutcome outcome = LowestFixedPoint.find(tj -> {
-            CircuitPoint cp = circuit.at(prepared, tj);
-            recent.keep(tj, cp);
-            return junctionK(tLocalK, rTheta, cp.diodePowerW());
+            CircuitState now = recent.next(tj);
+            circuit.solve(prepared, tj, now);
+            return junctionK(tLocalK, rTheta, now.diodePowerW());
         }, tLocalK, settings, loopGain);
         if (outcome instanceof FixedPointOutcome.Root r) {
-            CircuitPoint kept = recent.at(r.x());
-            CircuitPoint cp = kept != null ? kept : circuit.at(prepared, r.x());
+            CircuitState kept = recent.at(r.x());
+            CircuitPoint cp = kept != null ? kept.point() : circuit.at(prepared, r.x());
             double refK = path.referenceTemperatureK(r.x(), cp.diodePowerW());
             return new ThermalOutcome.Converged(new OperatingPoint(r.x(), tLocalK, refK, cp,
                     r.evaluations() + (kept != null ? 0 : 1), loopGain ? r.loopGain() : Double.NaN, r.residual()));
@@ -91,29 +93,34 @@ public final class ElectroThermalSolver {
         }
         OperatingPoint p = c.point();
         double rTheta = inst.path().rThetaJaKPerW();
-        double gain = LowestFixedPoint.loopGain(
-                tj -> junctionK(p.tLocalK(), rTheta, inst.circuit().at(inst.prepared(), tj).diodePowerW()), p.tjK());
+        CircuitState s = new CircuitState();
+        double gain = LowestFixedPoint.loopGain(tj -> {
+            inst.circuit().solve(inst.prepared(), tj, s);
+            return junctionK(p.tLocalK(), rTheta, s.diodePowerW());
+        }, p.tjK());
         return new ThermalOutcome.Converged(new OperatingPoint(p.tjK(), p.tLocalK(), p.referenceK(), p.circuit(),
                 p.evaluations() + 2, gain, p.residualK()));
     }
 
-    /** The circuit points of the last three evaluations of one solve, by junction temperature. */
+    /** The circuit states of the last three evaluations of one solve, by junction temperature: a ring. */
     private static final class Recent {
         private final double[] tjK = {Double.NaN, Double.NaN, Double.NaN};
-        private final CircuitPoint[] points = new CircuitPoint[3];
+        private final CircuitState[] states = {new CircuitState(), new CircuitState(), new CircuitState()};
         private int next;
 
-        void keep(double tj, CircuitPoint cp) {
-            tjK[next] = tj;
-            points[next] = cp;
-            next = (next + 1) % 3;
+        /** The state to solve the evaluation at {@code tj} into: the oldest of the three, now kept for {@code tj}. */
+        CircuitState next(double tj) {
+            int k = next;
+            tjK[k] = tj;
+            next = (k + 1) % 3;
+            return states[k];
         }
 
-        /** The point kept at exactly {@code tj}, or null. */
-        CircuitPoint at(double tj) {
+        /** The state kept at exactly {@code tj}, or null. */
+        CircuitState at(double tj) {
             for (int i = 0; i < 3; i++) {
                 if (tjK[i] == tj) {
-                    return points[i];
+                    return states[i];
                 }
             }
             return null;
