@@ -72,12 +72,17 @@ public record PositionSpec(String id, BreakdownPart part, SteadyThermalPath path
         return Corner.all(varyingAxes());
     }
 
-    /** The position at one corner. */
+    /**
+     * The position at one corner. Its path is the mounting's resistances evaluated once and scaled by the corner's
+     * factor, a {@code GivenPath}, also at the factor 1 (exact: {@code x·1 = x} in IEEE 754): the solvers read
+     * {@code Rθja} at every solve, and a surface-mount pad's interpolation (two logarithms and a power) is then not
+     * repeated there.
+     */
     public PositionInstance at(Corner c) {
         var diode = part.model().withVoltageShift(c.valueOf(Axis.VZ, vzShiftV))
                 .withAlpha(c.valueOf(Axis.TEMPERATURE_COEFFICIENT, alphaVPerK));
         double f = c.valueOf(Axis.THERMAL_RESISTANCE, rThetaFactor);
-        return new PositionInstance(c, diode, circuit.at(c), f == 1.0 ? path : path.scaledBy(f));
+        return new PositionInstance(c, diode, circuit.at(c), path.scaledBy(f));
     }
 
     /**
@@ -92,7 +97,7 @@ public record PositionSpec(String id, BreakdownPart part, SteadyThermalPath path
         if (!(f > 0)) {
             throw new IllegalArgumentException("thermal resistance factor must be > 0, got " + f);
         }
-        return new PositionInstance(Corner.NOMINAL, diode, circuit.atValues(v), f == 1.0 ? path : path.scaledBy(f));
+        return new PositionInstance(Corner.NOMINAL, diode, circuit.atValues(v), path.scaledBy(f));
     }
 
     /** The range of {@code axis} at this position, if it has that axis (a clamp has no series resistor). */
