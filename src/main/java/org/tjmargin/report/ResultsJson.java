@@ -6,6 +6,7 @@ import java.io.UncheckedIOException;
 import java.util.Map;
 import java.util.Optional;
 import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.StreamWriteFeature;
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
@@ -43,7 +44,13 @@ public final class ResultsJson {
      * the mapper (some three hundred classes, about a fifth of a second of a command-line run).
      */
     private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
-    private static final JsonFactory JSON = new JsonFactory();
+    /**
+     * Numbers as the shortest decimal that reads back as the same double (Schubfach, as {@code sweep.csv} writes
+     * them, see {@link SweepCsv#num}): the same text on every Java version, where Java 17's {@code Double.toString}
+     * sometimes writes a digit too many and is slow to compile and run.
+     */
+    private static final JsonFactory JSON = JsonFactory.builder().enable(StreamWriteFeature.USE_FAST_DOUBLE_WRITER)
+            .build();
 
     private ResultsJson() {
     }
