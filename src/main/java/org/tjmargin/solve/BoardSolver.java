@@ -45,8 +45,7 @@ public final class BoardSolver {
         PointStatus status = air.status();
         double heat = 0;
         for (int i = 0; i < board.board().positions().size(); i++) {
-            PositionAtAmbient p = evaluate(board.board().positions().get(i), board.instances().get(i), policy,
-                    ambientK, tLocal, settings, air.outcomesOf(i));
+            PositionAtAmbient p = evaluate(board, policy, i, ambientK, tLocal, settings, air);
             positions.add(p);
             status = status.worse(p.status());
             heat += maxHeatW(p, board.instances().get(i), settings);
@@ -62,8 +61,7 @@ public final class BoardSolver {
     public static PositionAtAmbient positionAt(PreparedBoard board, Policy policy, double ambientK,
                                                SolverSettings settings, int index) {
         Air air = air(board, ambientK, settings);
-        PositionAtAmbient p = evaluate(board.board().positions().get(index), board.instances().get(index), policy,
-                ambientK, ambientK + air.riseK(), settings, air.outcomesOf(index));
+        PositionAtAmbient p = evaluate(board, policy, index, ambientK, ambientK + air.riseK(), settings, air);
         if (air.status() == PointStatus.CONVERGED) {
             return p;
         }
@@ -112,16 +110,34 @@ public final class BoardSolver {
         return new Air(rise, air.evaluations(), status, last.tLocalK == ambientK + rise ? last.outcomes : null);
     }
 
+    /** Position {@code i} in the balanced air, reusing its corners' outcomes where the balance solved them there. */
+    private static PositionAtAmbient evaluate(PreparedBoard board, Policy policy, int i, double ambientK,
+                                              double tLocalK, SolverSettings settings, Air air) {
+        PositionSpec spec = board.board().positions().get(i);
+        List<PositionInstance> instances = board.instances().get(i);
+        List<ThermalOutcome> solved = air.outcomesOf(i);
+        return solved != null ? evaluate(spec, instances, policy, ambientK, tLocalK, settings, solved)
+                : evaluate(spec, instances, policy, ambientK, tLocalK, settings);
+    }
+
     /** Every corner of one position in air at {@code tLocalK}, held against the policy. */
     static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
                                       double ambientK, double tLocalK, SolverSettings settings) {
-        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, null);
+        List<ThermalOutcome> outcomes = new ArrayList<>(instances.size());
+        for (PositionInstance inst : instances) {
+            outcomes.add(inst.solveWithoutLoopGain(tLocalK, settings));
+        }
+        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, outcomes);
     }
 
-    /** As above, reusing the corners' outcomes in this air when the air balance already solved them (null: solve). */
+    /**
+     * As above, with the corners' outcomes in this air already solved (by the air balance or the caller). The solves
+     * stay out of this method so that it has no branch that one caller takes and another never does: the optimising
+     * compiler would otherwise compile it for the sweep's callers and throw that away at the first search probe.
+     */
     static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
                                               double ambientK, double tLocalK, SolverSettings settings,
-                                              List<ThermalOutcome> solved) {
+                                              List<ThermalOutcome> outcomes) {
         List<CornerPoint> corners = new ArrayList<>(instances.size());
         int hottest = -1;
         double hottestTj = Double.NEGATIVE_INFINITY;
@@ -131,13 +147,6 @@ public final class BoardSolver {
         PointStatus status = PointStatus.CONVERGED;
         WorstChecks worst = new WorstChecks(policy);
         double resistorAllowed = spec.resistorAllowedW(tLocalK);
-        List<ThermalOutcome> outcomes = solved;
-        if (outcomes == null) {
-            outcomes = new ArrayList<>(instances.size());
-            for (PositionInstance inst : instances) {
-                outcomes.add(inst.solveWithoutLoopGain(tLocalK, settings));
-            }
-        }
         boolean[] surgeAt = SurgeChecks.cornersToEvaluate(spec, instances, outcomes);
         for (int k = 0; k < instances.size(); k++) {
             PositionInstance inst = instances.get(k);
