@@ -19,17 +19,9 @@ public final class MeasureValues extends AbstractMap<Measure, Double> {
 
     /** {@code NaN} where the measure is absent (a held value is never NaN). */
     private final double[] byOrdinal;
-    private final int size;
 
     private MeasureValues(double[] byOrdinal) {
         this.byOrdinal = byOrdinal;
-        int n = 0;
-        for (double v : byOrdinal) {
-            if (!Double.isNaN(v)) {
-                n++;
-            }
-        }
-        size = n;
     }
 
     /**
@@ -72,9 +64,16 @@ public final class MeasureValues extends AbstractMap<Measure, Double> {
         return key instanceof Measure m && !Double.isNaN(byOrdinal[m.ordinal()]);
     }
 
+    /** Counted when asked (rarely: the rules read values by measure), not at every corner's construction. */
     @Override
     public int size() {
-        return size;
+        int n = 0;
+        for (double v : byOrdinal) {
+            if (!Double.isNaN(v)) {
+                n++;
+            }
+        }
+        return n;
     }
 
     @Override
@@ -112,7 +111,7 @@ public final class MeasureValues extends AbstractMap<Measure, Double> {
 
             @Override
             public int size() {
-                return size;
+                return MeasureValues.this.size();
             }
         };
     }
