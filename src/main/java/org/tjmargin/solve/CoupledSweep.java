@@ -68,9 +68,14 @@ final class CoupledSweep {
     record Result(List<BoardAtAmbient> sweep, List<PointStatus> air, List<AirMap.Sample> samples) {
     }
 
-    /** Every corner of every position solved at one air temperature, with the heat each puts into the air. */
+    /**
+     * Every corner of every position solved at one air temperature, with the heat each puts into the air, and each
+     * position held against the policy there for ambient {@code ambientK} (the ambient the pass was made for): if the
+     * pass turns out to be the ambient's balance, those are its results.
+     */
     private record Pass(double tLocalK, List<List<ThermalOutcome>> outcomes, double[][] heat, double[] maxHeat,
-                        double boardHeatW, AirMap.HeatFloor floor) {
+                        double boardHeatW, AirMap.HeatFloor floor, double ambientK,
+                        List<PositionAtAmbient> positions) {
 
         /** Whether each position's hottest corner is among its subset. */
         boolean hottestIn(int[][] subsets) {
@@ -131,7 +136,7 @@ final class CoupledSweep {
             Pass pass;
             double rise0;
             if (previous == null) {
-                pass = fullPass(board, ta, settings);
+                pass = fullPass(board, ta, settings, policy, ta, highest);
                 evaluations++;
                 rise0 = 0.0;
             } else {
@@ -159,7 +164,7 @@ final class CoupledSweep {
                 if (out instanceof FixedPointOutcome.Root r) {
                     rise = r.x();
                     if (pass.tLocalK() != ta + rise) {
-                        pass = fullPass(board, ta + rise, settings);
+                        pass = fullPass(board, ta + rise, settings, policy, ta, highest);
                         evaluations++;
                     }
                     if (pass.hottestIn(s)) {
@@ -177,15 +182,16 @@ final class CoupledSweep {
             }
             double tLocal = ta + rise;
             if (pass.tLocalK() != tLocal) {
-                pass = fullPass(board, tLocal, settings);
+                pass = fullPass(board, tLocal, settings, policy, ta, highest);
                 evaluations++;
             }
             final Pass at = pass;
-            List<PositionAtAmbient> positions = IntStream.range(0, board.instances().size()).parallel()
-                    .mapToObj(i -> BoardSolver.evaluate(board.board().positions().get(i), board.instances().get(i),
-                            policy, ta, tLocal, settings, at.outcomes().get(i)))
-                    .map(p -> highest ? p : p.reportedOnly())
-                    .toList();
+            // Held against the policy in the pass itself, while its corners are fresh in the cache; a pass carried
+            // over from the previous ambient was held for that ambient and is held again here.
+            List<PositionAtAmbient> positions = at.ambientK() == ta ? at.positions()
+                    : IntStream.range(0, board.instances().size()).parallel()
+                            .mapToObj(i -> held(board, policy, ta, tLocal, settings, at.outcomes().get(i), i, highest))
+                            .toList();
             PointStatus status = air;
             for (PositionAtAmbient p : positions) {
                 status = status.worse(p.status());
@@ -261,11 +267,28 @@ final class CoupledSweep {
         }
     }
 
-    /** Every corner of every position at air {@code tLocalK}; positions on all cores, the heat summed in order. */
-    private static Pass fullPass(PreparedBoard board, double tLocalK, SolverSettings settings) {
+    /** Position {@code i} held against the policy at ambient {@code ta} in air {@code tLocalK}, as the sweep keeps it. */
+    private static PositionAtAmbient held(PreparedBoard board, Policy policy, double ta, double tLocalK,
+                                          SolverSettings settings, List<ThermalOutcome> outcomes, int i,
+                                          boolean highest) {
+        PositionAtAmbient p = BoardSolver.evaluate(board.board().positions().get(i), board.instances().get(i), policy,
+                ta, tLocalK, settings, outcomes);
+        // Below the highest ambient a position keeps only its reported corners (PositionAtAmbient).
+        return highest ? p : p.reportedOnly();
+    }
+
+    /**
+     * Every corner of every position at air {@code tLocalK}, each position then held against the policy for ambient
+     * {@code ta}; positions on all cores, the heat summed in order. The policy checks of a pass that is not the
+     * ambient's balance (about one pass in a hundred) are wasted; done here, they read every corner's point while it
+     * is still in the cache instead of in a second pass over the whole board.
+     */
+    private static Pass fullPass(PreparedBoard board, double tLocalK, SolverSettings settings, Policy policy,
+                                 double ta, boolean highest) {
         int n = board.instances().size();
         @SuppressWarnings("unchecked")
         List<ThermalOutcome>[] outcomes = new List[n];
+        PositionAtAmbient[] held = new PositionAtAmbient[n];
         double[][] heat = new double[n][];
         double[] max = new double[n];
         double[] runaway = new double[n];
@@ -293,13 +316,14 @@ final class CoupledSweep {
             runaway[i] = o instanceof ThermalOutcome.Runaway ? m : 0.0;
             diode[i] = o instanceof ThermalOutcome.Converged c ? c.point().diodePowerW() : 0.0;
             perKelvin[i] = 1.0 / insts.get(hottest).path().rThetaJaKPerW();
+            held[i] = held(board, policy, ta, tLocalK, settings, outs, i, highest);
         });
         double sum = 0;
         for (double m : max) {
             sum += m;
         }
         return new Pass(tLocalK, Arrays.asList(outcomes), heat, max, sum,
-                AirMap.HeatFloor.of(runaway, diode, perKelvin));
+                AirMap.HeatFloor.of(runaway, diode, perKelvin), ta, List.of(held));
     }
 
     /** {@code Ĥ(x)}: each position at the hottest corner of its subset, solved for its heat only (W). */
