@@ -50,21 +50,30 @@ public final class ElectroThermalSolver {
     static ThermalOutcome solve(Circuit circuit, PreparedDiode prepared, SteadyThermalPath path, double tLocalK,
                                 SolverSettings settings, boolean loopGain) {
         final double rTheta = path.rThetaJaKPerW();
-        // The circuit points of the last evaluations, so that the point at the root (evaluated just before the two
-        // of the loop gain) is not solved again. Local to this call: the solver stays thread-safe.
-        // Each evaluation is solved into the oldest of three states (no point allocated per evaluation).
-        final Recent recent = new Recent();
+        // Every evaluation is solved into one state (no point allocated per evaluation). The search's root is always
+        // its last evaluation (LowestFixedPoint), so the state holds the root's point when the search returns; the
+        // loop gain's two evaluations come after it, into a state of their own.
+        final CircuitState now = new CircuitState();
+        final double[] nowTj = {Double.NaN};
         FixedPointOutcome outcome = LowestFixedPoint.find(tj -> {
-            CircuitState now = recent.next(tj);
             circuit.solve(prepared, tj, now);
+            nowTj[0] = tj;
             return junctionK(tLocalK, rTheta, now.diodePowerW());
-        }, tLocalK, settings, loopGain);
+        }, tLocalK, settings, false);
         if (outcome instanceof FixedPointOutcome.Root r) {
-            CircuitState kept = recent.at(r.x());
-            CircuitPoint cp = kept != null ? kept.point() : circuit.at(prepared, r.x());
+            boolean kept = nowTj[0] == r.x();
+            CircuitPoint cp = kept ? now.point() : circuit.at(prepared, r.x());
             double refK = path.referenceTemperatureK(r.x(), cp.diodePowerW());
-            return new ThermalOutcome.Converged(new OperatingPoint(r.x(), tLocalK, refK, cp,
-                    r.evaluations() + (kept != null ? 0 : 1), loopGain ? r.loopGain() : Double.NaN, r.residual()));
+            // The gain as the search with loopGain computes it (the same two evaluations at the root, the same
+            // count): LowestFixedPoint.loopGain.
+            double gain = Double.NaN;
+            int evaluations = r.evaluations() + (kept ? 0 : 1);
+            if (loopGain) {
+                gain = loopGainAt(circuit, prepared, rTheta, tLocalK, r.x());
+                evaluations += 2;
+            }
+            return new ThermalOutcome.Converged(new OperatingPoint(r.x(), tLocalK, refK, cp, evaluations, gain,
+                    r.residual()));
         }
         if (outcome instanceof FixedPointOutcome.Runaway) {
             return new ThermalOutcome.Runaway(tLocalK, settings.capK());
@@ -93,37 +102,18 @@ public final class ElectroThermalSolver {
         }
         OperatingPoint p = c.point();
         double rTheta = inst.path().rThetaJaKPerW();
-        CircuitState s = new CircuitState();
-        double gain = LowestFixedPoint.loopGain(tj -> {
-            inst.circuit().solve(inst.prepared(), tj, s);
-            return junctionK(p.tLocalK(), rTheta, s.diodePowerW());
-        }, p.tjK());
+        double gain = loopGainAt(inst.circuit(), inst.prepared(), rTheta, p.tLocalK(), p.tjK());
         return new ThermalOutcome.Converged(new OperatingPoint(p.tjK(), p.tLocalK(), p.referenceK(), p.circuit(),
                 p.evaluations() + 2, gain, p.residualK()));
     }
 
-    /** The circuit states of the last three evaluations of one solve, by junction temperature: a ring. */
-    private static final class Recent {
-        private final double[] tjK = {Double.NaN, Double.NaN, Double.NaN};
-        private final CircuitState[] states = {new CircuitState(), new CircuitState(), new CircuitState()};
-        private int next;
-
-        /** The state to solve the evaluation at {@code tj} into: the oldest of the three, now kept for {@code tj}. */
-        CircuitState next(double tj) {
-            int k = next;
-            tjK[k] = tj;
-            next = (k + 1) % 3;
-            return states[k];
-        }
-
-        /** The state kept at exactly {@code tj}, or null. */
-        CircuitState at(double tj) {
-            for (int i = 0; i < 3; i++) {
-                if (tjK[i] == tj) {
-                    return states[i];
-                }
-            }
-            return null;
-        }
+    /** The loop gain of the heat balance's map at {@code tjK}: {@link LowestFixedPoint#loopGain}'s two evaluations. */
+    private static double loopGainAt(Circuit circuit, PreparedDiode prepared, double rTheta, double tLocalK,
+                                     double tjK) {
+        CircuitState s = new CircuitState();
+        return LowestFixedPoint.loopGain(tj -> {
+            circuit.solve(prepared, tj, s);
+            return junctionK(tLocalK, rTheta, s.diodePowerW());
+        }, tjK);
     }
 }

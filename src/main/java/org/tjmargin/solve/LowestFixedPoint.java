@@ -171,8 +171,7 @@ public final class LowestFixedPoint {
         if (!loopGain) {
             return new FixedPointOutcome.Root(x, g, 0.0, evals);
         }
-        // The root itself was evaluated just before these two: a caller that keeps the state of its last three
-        // evaluations still holds the root's (ElectroThermalSolver does).
+        // The root itself is the last point evaluated before these two (every return above and in pegasus).
         return new FixedPointOutcome.Root(x, g, loopGain(map, x), evals + 2);
     }
 

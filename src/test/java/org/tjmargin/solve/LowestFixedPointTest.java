@@ -60,8 +60,8 @@ class LowestFixedPointTest {
 
     @Test
     void solvedPointIsTheCircuitAtTheRoot() {
-        // The solver keeps the circuit points of its last evaluations instead of solving the root's again: the point
-        // it returns must be the circuit solved afresh at the returned junction temperature.
+        // The solver keeps the circuit state of its last evaluation (the root's, see below) instead of solving the
+        // root's point again: the point it returns must be the circuit solved afresh at the returned temperature.
         long seed = 20261204L;
         Random rnd = new Random(seed);
         for (int n = 0; n < 1000; n++) {
@@ -74,5 +74,39 @@ class LowestFixedPointTest {
                 assertEquals(c.circuit().at(c.diode(), p.tjK()), p.circuit(), "seed " + seed + " case " + n);
             }
         }
+    }
+
+    @Test
+    void theRootIsTheLastPointEvaluated() {
+        // The contract ElectroThermalSolver builds on: without the loop gain the root is the last point the search
+        // evaluated, with it the third from last (then x + 1e-4 and x − 1e-4). Seeded heat maps of both signs of
+        // slope, roots near and far from the start, some at the start itself.
+        long seed = 20261205L;
+        Random rnd = new Random(seed);
+        int roots = 0;
+        for (int n = 0; n < 3000; n++) {
+            double r = 250 + 400 * rnd.nextDouble();
+            double m = 0.05 + 2 * rnd.nextDouble();
+            double q = 0.02 * rnd.nextDouble();
+            DoubleUnaryOperator shape = n % 2 == 0 ? x -> x - m * (x - r) * (1 + q * (x - r) * (x - r))
+                    : x -> x - m * (x - r) - q * Math.max(0, x - r) * (x - r);
+            double x0 = r - (n % 10 == 0 ? 0 : 200 * rnd.nextDouble());
+            for (boolean gain : new boolean[] {false, true}) {
+                double[] seen = new double[SolverSettings.DEFAULT.maxEvaluations() + 3];
+                int[] count = {0};
+                DoubleUnaryOperator map = x -> {
+                    seen[count[0]++] = x;
+                    return shape.applyAsDouble(x);
+                };
+                FixedPointOutcome out = LowestFixedPoint.find(map, x0, SolverSettings.DEFAULT, gain);
+                if (out instanceof FixedPointOutcome.Root root) {
+                    String where = "seed " + seed + " case " + n + (gain ? " with gain" : "");
+                    assertEquals(root.x(), seen[count[0] - (gain ? 3 : 1)], 0.0, where);
+                    assertEquals(count[0], root.evaluations(), where);
+                    roots++;
+                }
+            }
+        }
+        assertTrue(roots > 5000, "roots: " + roots);
     }
 }
