@@ -86,6 +86,7 @@ final class DesignReader {
         List<PositionSpec> out = new ArrayList<>();
         Set<String> ids = new LinkedHashSet<>();
         boolean ok = true;
+        SurgeMapping.Estimates estimates = new SurgeMapping.Estimates();
         List<Node> items = seq.get().items();
         for (int i = 0; i < items.size(); i++) {
             String path = top.pathOf("positions") + "[" + i + "]";
@@ -97,7 +98,7 @@ final class DesignReader {
                         + "' is already used by an earlier position");
                 ok = false;
             }
-            Optional<PositionSpec> p = PositionReader.read(top.ctx(), item, path, refs);
+            Optional<PositionSpec> p = PositionReader.read(top.ctx(), item, path, refs, estimates);
             Optional<VariationModel> model = p.flatMap(spec -> StatisticsReader.model(top.ctx(), item, path, spec,
                     byDefault));
             if (p.isPresent() && model.isPresent()) {

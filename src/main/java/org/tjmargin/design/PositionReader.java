@@ -31,7 +31,8 @@ final class PositionReader {
     private PositionReader() {
     }
 
-    static Optional<PositionSpec> read(FileContext ctx, Node node, String path, PartReferences refs) {
+    static Optional<PositionSpec> read(FileContext ctx, Node node, String path, PartReferences refs,
+                                       SurgeMapping.Estimates estimates) {
         Optional<Fields> of = Fields.of(ctx, node, path, KEYS);
         if (of.isEmpty()) {
             return Optional.empty();
@@ -66,7 +67,8 @@ final class PositionReader {
                         + "' has no surge data: give the part a 'surge' object to check surges");
                 return Optional.empty();
             }
-            Optional<SurgeRating> rating = SurgeMapping.rating(f, part.get().surge().get(), thermal.get());
+            Optional<SurgeRating> rating = SurgeMapping.rating(f, part.get().surge().get(), thermal.get(),
+                    estimates);
             if (rating.isEmpty()) {
                 return Optional.empty();
             }

@@ -1,7 +1,9 @@
 package org.tjmargin.design;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 import org.tjmargin.surge.SurgeRating;
@@ -30,7 +32,27 @@ final class SurgeMapping {
     private SurgeMapping() {
     }
 
-    static Optional<SurgeRating> rating(Fields position, SurgePartSpec spec, SteadyThermalPath path) {
+    /**
+     * The estimates fitted so far while reading one design, by die area and steady resistance: positions with the
+     * same part on the same mounting share one fit (a Levenberg–Marquardt fit of six stages each; a board of many
+     * identical input clamps would otherwise fit the same network again and again). Not thread-safe: one per read.
+     */
+    static final class Estimates {
+        private record Key(double dieAreaM2, double rssKPerW) {
+        }
+
+        private final Map<Key, FosterFitOutcome> fitted = new HashMap<>();
+
+        FosterFitOutcome of(SemiInfiniteDie die, double dieAreaM2, double rss) {
+            return fitted.computeIfAbsent(new Key(dieAreaM2, rss), k -> {
+                double to = Math.max(ESTIMATE_AT_LEAST_TO_S, 10 * die.capTimeS(rss));
+                return die.fosterEstimate(ESTIMATE_FROM_S, to, rss, ESTIMATE_STAGES, FosterFitSettings.defaults());
+            });
+        }
+    }
+
+    static Optional<SurgeRating> rating(Fields position, SurgePartSpec spec, SteadyThermalPath path,
+                                        Estimates estimates) {
         List<String> notes = new ArrayList<>(spec.notes());
         FosterNetwork network;
         if (spec.network().isPresent()) {
@@ -40,8 +62,7 @@ final class SurgeMapping {
                     SemiInfiniteDie.silicon(1.0).effusivity());
             SemiInfiniteDie die = SemiInfiniteDie.silicon(area);
             double rss = path.rThetaJaKPerW();
-            double to = Math.max(ESTIMATE_AT_LEAST_TO_S, 10 * die.capTimeS(rss));
-            FosterFitOutcome out = die.fosterEstimate(ESTIMATE_FROM_S, to, rss, ESTIMATE_STAGES, FosterFitSettings.defaults());
+            FosterFitOutcome out = estimates.of(die, area, rss);
             if (!(out instanceof FosterFitOutcome.Fitted fitted)) {
                 position.report(InputProblem.Kind.NOT_PHYSICAL, "surges", "the default surge thermal estimate could not be "
                         + "fitted: " + ((FosterFitOutcome.Failed) out).reason() + "; give the part's transient data");

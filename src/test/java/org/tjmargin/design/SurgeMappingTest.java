@@ -84,4 +84,25 @@ class SurgeMappingTest {
         assertEquals(1500, p, 0.06 * 1500);
         assertEquals(0.292729, RatingConversion.EXPONENTIAL_EQUIVALENT_RECTANGLE_PER_TAU, 0.0);
     }
+
+    @Test
+    void positionsOfOnePartOnOneMountingShareTheirDieEstimate() throws IOException {
+        // Three clamps of the same part: two on the part's own package path, one on a doubled Rθ (another steady
+        // resistance, so another fit). The shared fit is the same network the first position's own fit gives.
+        Files.writeString(dir.resolve("parts.yaml"), PART);
+        Path d = dir.resolve("design.yaml");
+        String clamp = "    part: c\n    circuit: {standoff-clamp: {line: {min: 12 V, max: 16 V}}}\n"
+                + "    surges:\n      - {id: s, current-pulse: {waveform: 8/20, peak: 100 A}}\n";
+        Files.writeString(d, "design: t\nparts: parts.yaml\nambient: {min: 0 °C, max: 40 °C, step: 20 K}\n"
+                + "enclosure: {open-air: true}\npositions:\n"
+                + "  - id: D1\n" + clamp + "  - id: D2\n" + clamp
+                + "  - id: D3\n    mounting: {rtheta-ja: 80 K/W}\n" + clamp);
+        var positions = DesignLoader.load(d).board().positions();
+        FosterNetwork d1 = positions.get(0).surges().orElseThrow().rating().network();
+        FosterNetwork d2 = positions.get(1).surges().orElseThrow().rating().network();
+        FosterNetwork d3 = positions.get(2).surges().orElseThrow().rating().network();
+        assertTrue(d1 == d2, "one fit for the same part on the same mounting");
+        assertEquals(40.0, d1.steadyStateKPerW(), 0.1 * 40);
+        assertEquals(80.0, d3.steadyStateKPerW(), 0.1 * 80);
+    }
 }
