@@ -63,7 +63,7 @@ public final class SweepCsv {
     /** The rows of one ambient, without the header. */
     private static String rows(BoardAtAmbient b) {
         StringBuilder out = new StringBuilder(256 * 2 * b.positions().size());
-        try {
+        try (CSVPrinter csv = new CSVPrinter(out, FORMAT)) {
             // The ambient, the enclosure's rise and (in a sealed box) the air are the same on every row of an
             // ambient: each is written once and its text reused.
             Repeated ambient = new Repeated();
@@ -74,10 +74,10 @@ public final class SweepCsv {
                 String amb = ambient.num(Labels.celsius(p.ambientK()));
                 String local = air.num(Labels.celsius(p.tLocalK()));
                 if (p.hottest().isPresent()) {
-                    row(out, amb, local, rise, p, same ? "hottest,least-current" : "hottest", p.hottest().get());
+                    row(csv, amb, local, rise, p, same ? "hottest,least-current" : "hottest", p.hottest().get());
                 }
                 if (!same && p.leastCurrent().isPresent()) {
-                    row(out, amb, local, rise, p, "least-current", p.leastCurrent().get());
+                    row(csv, amb, local, rise, p, "least-current", p.leastCurrent().get());
                 }
             }
         } catch (IOException e) {
@@ -101,49 +101,15 @@ public final class SweepCsv {
         }
     }
 
-    /**
-     * One record. The text fields go through the format's own quoting ({@link CSVFormat#print(Object, Appendable,
-     * boolean)}, what {@link CSVPrinter#printRecord} calls per value); a number from {@link #num(double)} is written
-     * after its delimiter as it is, since its characters (digits, {@code - . E}, {@code NaN}, {@code Infinity}) never
-     * need quotes (held against the format's own printing in {@code SweepCsvNumberTest}). Same text as a
-     * {@code CSVPrinter}, without scanning thirteen numbers per row for characters to quote.
-     */
-    private static void row(StringBuilder out, String ambientC, String tLocalC, String riseK, PositionAtAmbient p,
+    private static void row(CSVPrinter csv, String ambientC, String tLocalC, String riseK, PositionAtAmbient p,
                             String role, CornerPoint c) throws IOException {
         OperatingPoint op = c.point().orElse(null);
-        FORMAT.print(p.positionId(), out, true);
-        number(out, ambientC);
-        number(out, tLocalC);
-        number(out, riseK);
-        FORMAT.print(c.status().name(), out, false);
-        number(out, num(p.margin()));
-        FORMAT.print(p.limitingRuleId(), out, false);
-        FORMAT.print(role, out, false);
-        FORMAT.print(c.corner().label(), out, false);
-        if (op == null) {
-            for (int k = 0; k < 6; k++) {
-                FORMAT.print("", out, false);
-            }
-            number(out, num(c.allowedPowerW()));
-            FORMAT.print("", out, false);
-            FORMAT.print("", out, false);
-        } else {
-            number(out, num(Labels.celsius(op.tjK())));
-            number(out, num(Labels.celsius(op.referenceK())));
-            number(out, num(op.circuit().voltageV()));
-            number(out, num(op.circuit().diodeCurrentA()));
-            number(out, num(op.diodePowerW()));
-            number(out, num(op.circuit().resistorPowerW()));
-            number(out, num(c.allowedPowerW()));
-            number(out, num(op.loopGain()));
-            out.append(FORMAT.getDelimiterString()).append(op.evaluations());
-        }
-        FORMAT.println(out);
-    }
-
-    /** A field that needs no quotes, after its delimiter. */
-    private static void number(StringBuilder out, String text) {
-        out.append(FORMAT.getDelimiterString()).append(text);
+        csv.printRecord(p.positionId(), ambientC, tLocalC, riseK, c.status().name(), num(p.margin()),
+                p.limitingRuleId(), role, c.corner().label(),
+                op == null ? "" : num(Labels.celsius(op.tjK())), op == null ? "" : num(Labels.celsius(op.referenceK())),
+                op == null ? "" : num(op.circuit().voltageV()), op == null ? "" : num(op.circuit().diodeCurrentA()),
+                op == null ? "" : num(op.diodePowerW()), op == null ? "" : num(op.circuit().resistorPowerW()),
+                num(c.allowedPowerW()), op == null ? "" : num(op.loopGain()), op == null ? "" : op.evaluations());
     }
 
     /**

@@ -94,7 +94,7 @@ public final class BoardSolver {
         }
         LastHeat last = new LastHeat();
         FixedPointOutcome air = LowestFixedPoint.find(
-                dT -> enc.riseK(boardHeatW(board, ambientK + dT, settings, last)), 0.0, AIR_BALANCE, false);
+                dT -> enc.riseK(boardHeatW(board, ambientK + dT, settings, last)), 0.0, AIR_BALANCE);
         double rise;
         PointStatus status;
         if (air instanceof FixedPointOutcome.Root r) {

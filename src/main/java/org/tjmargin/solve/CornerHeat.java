@@ -58,7 +58,7 @@ final class CornerHeat {
             inst.circuit().solve(prepared, tj, last);
             lastTj[0] = tj;
             return ElectroThermalSolver.junctionK(tLocalK, rTheta, last.diodePowerW());
-        }, tLocalK, settings, false);
+        }, tLocalK, settings);
         if (outcome instanceof FixedPointOutcome.Root r) {
             if (lastTj[0] != r.x()) {
                 inst.circuit().solve(prepared, r.x(), last);

@@ -159,7 +159,7 @@ final class CoupledSweep {
                     }
                     evaluations++;
                 }
-                FixedPointOutcome out = LowestFixedPoint.find(map, start, BoardSolver.AIR_BALANCE, false);
+                FixedPointOutcome out = LowestFixedPoint.find(map, start, BoardSolver.AIR_BALANCE);
                 evaluations += out.evaluations() - map.cacheHits();
                 if (out instanceof FixedPointOutcome.Root r) {
                     rise = r.x();

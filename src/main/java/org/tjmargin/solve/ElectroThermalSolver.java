@@ -59,7 +59,7 @@ public final class ElectroThermalSolver {
             circuit.solve(prepared, tj, now);
             nowTj[0] = tj;
             return junctionK(tLocalK, rTheta, now.diodePowerW());
-        }, tLocalK, settings, false);
+        }, tLocalK, settings);
         if (outcome instanceof FixedPointOutcome.Root r) {
             boolean kept = nowTj[0] == r.x();
             CircuitPoint cp = kept ? now.point() : circuit.at(prepared, r.x());

@@ -15,10 +15,9 @@ public sealed interface FixedPointOutcome
      *
      * @param x           the root
      * @param residual    {@code x − F(x)} there
-     * @param loopGain    {@code dF/dx} at the root; below 1 for a stable operating point
      * @param evaluations evaluations used
      */
-    record Root(double x, double residual, double loopGain, int evaluations) implements FixedPointOutcome {
+    record Root(double x, double residual, int evaluations) implements FixedPointOutcome {
     }
 
     /**

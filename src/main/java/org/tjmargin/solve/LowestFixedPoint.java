@@ -50,20 +50,10 @@ public final class LowestFixedPoint {
      * @param map      the map {@code F}
      * @param x0       start, with {@code F(x0) ≥ x0} expected
      * @param settings cap, tolerance, budget
-     * @return the outcome
+     * @return the outcome; a root returned is always the last point evaluated (callers keep that evaluation's
+     *         state instead of evaluating the root again), its loop gain, where wanted, is {@link #loopGain}
      */
     public static FixedPointOutcome find(DoubleUnaryOperator map, double x0, SolverSettings settings) {
-        return find(map, x0, settings, true);
-    }
-
-    /**
-     * As {@link #find(DoubleUnaryOperator, double, SolverSettings)}; without {@code loopGain} the root's loop gain
-     * is not computed (reported as 0) and its two extra evaluations are saved, for maps that are costly to
-     * evaluate and whose gain nobody reads (the board's air balance). A root returned was the last point evaluated
-     * without the gain, the third from last with it (before {@code x ± 1e-4}).
-     */
-    public static FixedPointOutcome find(DoubleUnaryOperator map, double x0, SolverSettings settings,
-                                         boolean loopGain) {
         final double cap = settings.capK();
         final double tol = settings.toleranceK();
         final int budget = settings.maxEvaluations();
@@ -73,7 +63,7 @@ public final class LowestFixedPoint {
         double ga = xa - heat(map, xa);
         evals++;
         if (ga >= -tol) {
-            return root(map, xa, ga, evals, loopGain);
+            return new FixedPointOutcome.Root(xa, ga, evals);
         }
         final double maxStep = settings.maxStepK();
         double xb = Math.min(xa + Math.min(-ga, maxStep), cap);
@@ -82,10 +72,10 @@ public final class LowestFixedPoint {
         evals++;
         while (evals < budget) {
             if (Math.abs(gb) <= tol) {
-                return root(map, xb, gb, evals, loopGain);
+                return new FixedPointOutcome.Root(xb, gb, evals);
             }
             if (gb > 0) {
-                return pegasus(map, xa, ga, xb, gb, evals, settings, loopGain);
+                return pegasus(map, xa, ga, xb, gb, evals, settings);
             }
             if (xb >= cap) {
                 return new FixedPointOutcome.Runaway(xb, evals);
@@ -125,7 +115,7 @@ public final class LowestFixedPoint {
      * whichever comes first; the root returned is always the last point evaluated.
      */
     static FixedPointOutcome pegasus(DoubleUnaryOperator map, double lo, double gLo, double hi, double gHi,
-                                     int evalsSoFar, SolverSettings settings, boolean loopGain) {
+                                     int evalsSoFar, SolverSettings settings) {
         final double residualTol = 0.1 * settings.toleranceK();
         final double absoluteTol = 0.01 * settings.toleranceK();
         final double relativeTol = 1e-15;
@@ -139,7 +129,7 @@ public final class LowestFixedPoint {
             double g = x - map.applyAsDouble(x);
             evals++;
             if (g == 0.0) {
-                return accepted(map, x, g, evals, loopGain);
+                return accepted(x, g, evals);
             }
             if (g1 * g < 0) {
                 x0 = x1;
@@ -151,33 +141,23 @@ public final class LowestFixedPoint {
             x1 = x;
             g1 = g;
             if (Math.abs(g1) <= residualTol || Math.abs(x1 - x0) < Math.max(relativeTol * Math.abs(x1), absoluteTol)) {
-                return accepted(map, x1, g1, evals, loopGain);
+                return accepted(x1, g1, evals);
             }
         }
         return new FixedPointOutcome.Exhausted(x1, g1, evals);
     }
 
-    private static FixedPointOutcome accepted(DoubleUnaryOperator map, double x, double g, int evals,
-                                              boolean loopGain) {
+    private static FixedPointOutcome accepted(double x, double g, int evals) {
         if (!(Math.abs(g) <= ACCEPTED_RESIDUAL)) {
             // A sign change without a zero: F jumps across the diagonal. No operating point to stand behind.
             return new FixedPointOutcome.Exhausted(x, g, evals);
         }
-        return root(map, x, g, evals, loopGain);
-    }
-
-    private static FixedPointOutcome root(DoubleUnaryOperator map, double x, double g, int evals,
-                                          boolean loopGain) {
-        if (!loopGain) {
-            return new FixedPointOutcome.Root(x, g, 0.0, evals);
-        }
-        // The root itself is the last point evaluated before these two (every return above and in pegasus).
-        return new FixedPointOutcome.Root(x, g, loopGain(map, x), evals + 2);
+        return new FixedPointOutcome.Root(x, g, evals);
     }
 
     /**
      * The loop gain {@code dF/dx} at {@code x}, a central difference over ±{@value #GAIN_STEP}: two evaluations of
-     * {@code map}, the only place it is computed (also for a root found without it and asked for later).
+     * {@code map}, the only place it is computed (ElectroThermalSolver asks for it at the roots it reports).
      */
     static double loopGain(DoubleUnaryOperator map, double x) {
         return (map.applyAsDouble(x + GAIN_STEP) - map.applyAsDouble(x - GAIN_STEP)) / (2 * GAIN_STEP);

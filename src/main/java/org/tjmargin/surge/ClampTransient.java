@@ -132,7 +132,6 @@ public final class ClampTransient {
         private double peakTj = Double.NEGATIVE_INFINITY;
         private double peakTjTime;
 
-        private double cachedH = -1;
         private FosterStep cachedStep;
 
         Run(SurgeSource source, ClampLine clamp, FosterNetwork network, double startTjK, FosterState startRise,
@@ -159,12 +158,10 @@ public final class ClampTransient {
         private FosterStep stepFor(double h) {
             if (cachedStep == null) {
                 cachedStep = FosterStep.reusable(network, h);
-                cachedH = h;
-            } else if (h != cachedH) {
+            } else if (h != cachedStep.lengthS()) {
                 // Recomputed in place: the step changes at almost every step, and a new one each time was most of
                 // the transient's garbage.
                 cachedStep.relength(h);
-                cachedH = h;
             }
             return cachedStep;
         }

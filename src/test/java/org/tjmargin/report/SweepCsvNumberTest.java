@@ -30,9 +30,9 @@ class SweepCsvNumberTest {
     }
 
     /**
-     * {@code SweepCsv} writes its numbers after their delimiter without the format's quoting scan; this holds that
-     * Commons CSV's RFC 4180 printing (what a {@code CSVPrinter} does per value) leaves every such number unquoted,
-     * as first field and after one, including the non-finite ones.
+     * The numbers of {@code sweep.csv} are never quoted (a spreadsheet reads them as numbers): Commons CSV's
+     * RFC 4180 printing (what a {@code CSVPrinter} does per value) leaves every one unquoted, as first field and
+     * after one, including the non-finite ones.
      */
     @Test
     void numbersNeedNoQuotesInRfc4180() throws Exception {
