@@ -20,10 +20,35 @@ public final class Labels {
         return c instanceof CurrentFedSpec ? "current-fed" : "standoff-clamp";
     }
 
-    /** Kelvin to °C for display and for the {@code …C} keys. */
+    /**
+     * Kelvin to °C for display and for the {@code …C} keys, {@code t/°C = T/K − 273.15} (the SI definition of the
+     * Celsius temperature, SI Brochure, 9th edition, 2.3.1; section from memory, verify), without the round trip's
+     * rounding where the value is a decimal of at most {@value #SNAP_DECIMALS} places.
+     *
+     * <p>Temperatures are held in kelvin, so a temperature the user gave in °C comes back through two roundings
+     * ({@code −20 °C} is 253.14999999999998 K, and the sweep's grid adds its own): written as it is, the design's
+     * lowest ambient would read {@code −19.99999999999997}. The error of that round trip is a few units in the last
+     * place of a kelvin value (about 1e-13 K); a value within {@value #SNAP_K} K of a decimal with at most
+     * {@value #SNAP_DECIMALS} places is written as that decimal. The window is a hundred times the round trip's error
+     * and a tenth of the junction solver's residual tolerance (1e-10 K), so it never moves a computed temperature by
+     * anything the solve itself resolves; a value outside it is written as it is.
+     */
     public static double celsius(double kelvin) {
-        return Celsius.toCelsius(kelvin);
+        double c = Celsius.toCelsius(kelvin);
+        if (!(Math.abs(c) < SNAP_RANGE_C)) {
+            return c;
+        }
+        double decimal = Math.round(c * SNAP_SCALE) / SNAP_SCALE;
+        return Math.abs(c - decimal) <= SNAP_K ? decimal : c;
     }
+
+    /** Decimal places a temperature in °C is snapped to when it lies within {@link #SNAP_K} of one. */
+    static final int SNAP_DECIMALS = 6;
+    /** Window of that snap (K). */
+    static final double SNAP_K = 1e-11;
+    private static final double SNAP_SCALE = 1e6;
+    /** Beyond this magnitude (°C) a temperature is written as it is (no junction or air gets near it). */
+    private static final double SNAP_RANGE_C = 1e6;
 
     /** The maximum ambient in words: {@code 61.3 °C}, {@code ≥ 200.0 °C (Tj max)} or {@code none}. */
     public static String maxAmbient(MaximumAmbient m) {
