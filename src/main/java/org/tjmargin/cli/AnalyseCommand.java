@@ -139,13 +139,13 @@ public final class AnalyseCommand implements Callable<Integer> {
         // The bar stays up until every file is written and is cleared before the table is printed.
         try (ProgressBar progress = ProgressBar.start(err, !quiet && System.console() != null)) {
             progress.phase("corner analysis");
-            result = Analysis.run(loaded.board(), policy, SolverSettings.DEFAULT);
+            result = Analysis.run(loaded.board(), policy, SolverSettings.DEFAULT, progress);
             if (runStatistics) {
                 progress.phase("statistics");
                 StatisticsPlan plan = loaded.statisticsWith(Optional.ofNullable(samples), Optional.ofNullable(seed));
                 stats = Optional.of(StatisticalAnalysis.run(result, plan, SolverSettings.DEFAULT, progress));
             }
-            progress.phase("charts and report");
+            progress.phase("results.json");
             cautions = Cautions.forResult(result);
             List<InputFile> allInputs = new java.util.ArrayList<>(loaded.inputs());
             allInputs.addAll(loadedPolicy.inputs());
@@ -153,7 +153,9 @@ public final class AnalyseCommand implements Callable<Integer> {
                     .map(f -> new ReportInputs.InputDigest(f.path().toString(), f.sha256())).toList());
             detailed = ReportDetail.leastMargin(result, detail);
             resultsJson = ResultsJson.render(result, stats, provenance, detailed);
-            charts = ChartSet.render(result, stats, ChartSize.DEFAULT, detailed);
+            progress.phase(ProgressBar.CHART_PHASE);
+            charts = ChartSet.render(result, stats, ChartSize.DEFAULT, detailed, progress);
+            progress.phase("sweep.csv and report");
             OutputFiles files = new OutputFiles()
                     .text("results.json", resultsJson)
                     .pieces("sweep.csv", SweepCsv.renderUtf8(result))

@@ -6,19 +6,29 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.ScheduledExecutorService;
 import java.util.concurrent.TimeUnit;
 import java.util.function.LongSupplier;
+import org.tjmargin.report.ChartSet;
+import org.tjmargin.solve.AnalysisProgress;
 import org.tjmargin.variation.statistical.StatisticsProgress;
 
 /**
  * A one-line progress bar on standard error, redrawn in place with a carriage return: the phase, a bar where the
- * phase can say how far it is (the statistics, in samples) and the time so far. It appears only once the run has
+ * phase can say how far it is (the corner analysis's sweep in ambients and its searches in positions, the
+ * statistics in samples, the charts in charts) and the time so far. It appears only once the run has
  * taken {@link #SHOW_AFTER_NS} (a quick run prints nothing) and only when enabled: the command enables it when
  * the console is interactive and {@code --quiet} is not given, so a redirected or piped run never carries it.
  * The line is cleared when the run ends.
  *
- * <p>Thread-safe: {@link #advanced} is called from the statistics' worker threads, drawing happens on one timer
- * thread and under this object's lock.
+ * <p>Thread-safe: {@link #advanced}, {@link #ambientsSwept}, {@link #positionsSearched} and {@link #chartsDrawn} are
+ * called from worker threads, drawing happens on one timer thread and under this object's lock.
  */
-final class ProgressBar implements StatisticsProgress, AutoCloseable {
+final class ProgressBar implements AnalysisProgress, StatisticsProgress, ChartSet.Progress, AutoCloseable {
+
+    /** The corner analysis's phase while it sweeps the ambients. */
+    static final String SWEEP_PHASE = "corner analysis, sweep";
+    /** The corner analysis's phase while it searches each position's maximum ambient and runaway onset. */
+    static final String SEARCH_PHASE = "corner analysis, maximum ambient";
+    /** The phase that draws the charts. */
+    static final String CHART_PHASE = "charts";
 
     /** The run must take this long before the bar appears: about a second (1 s). */
     static final long SHOW_AFTER_NS = 1_000_000_000L;
@@ -67,6 +77,33 @@ final class ProgressBar implements StatisticsProgress, AutoCloseable {
     void phase(String name) {
         phase = name;
         fraction = Double.NaN;
+    }
+
+    @Override
+    public void ambientsSwept(int done, int total) {
+        counted(SWEEP_PHASE, done, total);
+    }
+
+    @Override
+    public void positionsSearched(int done, int total) {
+        counted(SEARCH_PHASE, done, total);
+    }
+
+    @Override
+    public void chartsDrawn(int done, int total) {
+        counted(CHART_PHASE, done, total);
+    }
+
+    /**
+     * The phase and its fraction together. Workers report out of order, so a count lower than the one shown is
+     * kept from moving the bar back within one phase.
+     */
+    private synchronized void counted(String name, long done, long total) {
+        double f = total <= 0 ? Double.NaN : Math.min(1.0, (double) done / total);
+        if (!name.equals(phase) || Double.isNaN(fraction) || !(f < fraction)) {
+            phase = name;
+            fraction = f;
+        }
     }
 
     @Override

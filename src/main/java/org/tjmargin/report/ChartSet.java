@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import java.util.concurrent.atomic.AtomicInteger;
 import org.jfree.chart.JFreeChart;
 import org.tjmargin.solve.AnalysisResult;
 import org.tjmargin.solve.PositionSpec;
@@ -49,6 +50,23 @@ public final class ChartSet {
     /** The charts of the detailed positions only, with their statistics when given, at {@code size}. */
     public static List<RenderedChart> render(AnalysisResult result, Optional<StatisticsResult> stats,
                                              ChartSize size, ReportDetail detail) {
+        return render(result, stats, size, detail, Progress.NONE);
+    }
+
+    /** How many of the charts are drawn, for a progress display; told from the drawing threads. */
+    @FunctionalInterface
+    public interface Progress {
+
+        /** Ignores progress. */
+        Progress NONE = (done, total) -> { };
+
+        /** {@code done} of the {@code total} charts are drawn (PNG and SVG). */
+        void chartsDrawn(int done, int total);
+    }
+
+    /** As above, telling {@code progress} after each chart (which changes nothing in the charts). */
+    public static List<RenderedChart> render(AnalysisResult result, Optional<StatisticsResult> stats,
+                                             ChartSize size, ReportDetail detail, Progress progress) {
         Objects.requireNonNull(result, "result");
         Objects.requireNonNull(stats, "stats");
         Objects.requireNonNull(size, "size");
@@ -64,9 +82,15 @@ public final class ChartSet {
         }
         // Charts are independent objects, each drawn into its own image and SVG context, so they render on all
         // cores; the ordered stream keeps the list in position/kind order.
+        AtomicInteger drawn = new AtomicInteger();
+        int total = tasks.size();
         return tasks.parallelStream()
-                .map(t -> ChartRenderer.render(ChartNames.baseName(stems.get(t.position()), t.kind()), t.kind(),
-                        build(result, stats, t.position(), t.kind()), size))
+                .map(t -> {
+                    RenderedChart c = ChartRenderer.render(ChartNames.baseName(stems.get(t.position()), t.kind()),
+                            t.kind(), build(result, stats, t.position(), t.kind()), size);
+                    progress.chartsDrawn(drawn.incrementAndGet(), total);
+                    return c;
+                })
                 .toList();
     }
 

@@ -1,5 +1,7 @@
 package org.tjmargin.solve;
 
+import java.util.concurrent.atomic.AtomicInteger;
+
 import java.util.List;
 import java.util.Optional;
 import org.tjmargin.derating.Policy;
@@ -25,19 +27,30 @@ public final class Analysis {
      * @param settings solver settings
      */
     public static AnalysisResult run(Board board, Policy policy, SolverSettings settings) {
+        return run(board, policy, settings, AnalysisProgress.NONE);
+    }
+
+    /**
+     * Runs the analysis, telling {@code progress} how far it has come (which changes nothing in the result).
+     *
+     * @param progress told after each ambient of the sweep and each position's searches
+     */
+    public static AnalysisResult run(Board board, Policy policy, SolverSettings settings, AnalysisProgress progress) {
         PreparedBoard prepared = PreparedBoard.of(board);
         List<BoardAtAmbient> sweep;
         AirMap map;
         if (board.enclosure().couplesPositions()) {
-            CoupledSweep.Result r = CoupledSweep.run(prepared, policy, settings);
+            CoupledSweep.Result r = CoupledSweep.run(prepared, policy, settings, progress);
             sweep = r.sweep();
             map = AirMap.of(prepared, settings, r);
         } else {
             // Without coupling every ambient is an independent pure solve: they run on all cores.
             double[] ambients = board.ambient().temperaturesK();
+            AtomicInteger swept = new AtomicInteger();
             sweep = java.util.stream.IntStream.range(0, ambients.length).parallel()
                     .mapToObj(a -> {
                         BoardAtAmbient b = BoardSolver.solveAt(prepared, policy, ambients[a], settings);
+                        progress.ambientsSwept(swept.incrementAndGet(), ambients.length);
                         // Below the highest ambient a position keeps only its reported corners.
                         return a == ambients.length - 1 ? b : b.reportedOnly();
                     }).toList();
@@ -46,9 +59,15 @@ public final class Analysis {
         // Every position's search is a pure function of the sweep and the map (whose answers do not depend on the
         // order of the questions): they run on all cores, and the ordered stream keeps board order.
         List<PositionResult> results;
+        int n = board.positions().size();
+        AtomicInteger searched = new AtomicInteger();
         try (map) {
-            results = java.util.stream.IntStream.range(0, board.positions().size()).parallel()
-                    .mapToObj(i -> positionResult(prepared, policy, sweep, map, i, settings)).toList();
+            results = java.util.stream.IntStream.range(0, n).parallel()
+                    .mapToObj(i -> {
+                        PositionResult r = positionResult(prepared, policy, sweep, map, i, settings);
+                        progress.positionsSearched(searched.incrementAndGet(), n);
+                        return r;
+                    }).toList();
         }
         Verdict overall = Verdict.PASS;
         for (PositionResult r : results) {

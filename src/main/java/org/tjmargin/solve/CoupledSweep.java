@@ -117,6 +117,11 @@ final class CoupledSweep {
      * @param settings junction solve settings
      */
     static Result run(PreparedBoard board, Policy policy, SolverSettings settings) {
+        return run(board, policy, settings, AnalysisProgress.NONE);
+    }
+
+    /** As above, telling {@code progress} after each ambient. */
+    static Result run(PreparedBoard board, Policy policy, SolverSettings settings, AnalysisProgress progress) {
         Enclosure enc = board.board().enclosure();
         if (!enc.couplesPositions()) {
             throw new IllegalArgumentException("the continuation sweep is for an enclosure that couples positions");
@@ -197,6 +202,7 @@ final class CoupledSweep {
                 status = status.worse(p.status());
             }
             sweep.add(new BoardAtAmbient(ta, rise, pass.boardHeatW(), positions, evaluations, status));
+            progress.ambientsSwept(a + 1, ambients.length);
             airStatus.add(air);
             if (air == PointStatus.CONVERGED) {
                 samples.add(new AirMap.Sample(tLocal, tLocal - enc.riseK(pass.boardHeatW()), pass.floor()));
