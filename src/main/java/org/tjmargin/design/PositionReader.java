@@ -12,6 +12,7 @@ import org.tjmargin.surge.PositionSurges;
 import org.tjmargin.surge.SurgeCase;
 import org.tjmargin.surge.SurgeRating;
 import org.tjmargin.thermal.SteadyThermalPath;
+import org.tjmargin.units.Decimals;
 import org.tjmargin.variation.Range;
 
 /**
@@ -80,7 +81,8 @@ final class PositionReader {
         Optional<PositionSurges> positionSurges = withRating;
         BreakdownPart bp = part.get().part();
         double vzTolerance = vzTol.map(Value::si).orElse(bp.vzTolerance());
-        double shift = vzTolerance * bp.vzNomV();
+        // In decimal: 5 % of 12 V is 0.6 V, not 0.6000000000000001 V (Decimals).
+        double shift = Decimals.product(vzTolerance, bp.vzNomV());
         Range rThetaFactor = Range.relative(1.0, rTheta.map(Value::si).orElse(0.0));
         List<String> notes = new ArrayList<>();
         return f.build(() -> new PositionSpec(id.get(), bp, thermal.get(), circuit.get(), new Range(-shift, 0, shift),

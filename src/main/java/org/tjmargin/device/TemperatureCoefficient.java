@@ -1,5 +1,7 @@
 package org.tjmargin.device;
 
+import org.tjmargin.units.Decimals;
+
 /**
  * Temperature coefficient of the breakdown voltage, {@code αV = dVz/dTj} in V/K, with its tolerance range
  * and whether it was estimated from the nominal voltage rather than read from the part's data.
@@ -39,7 +41,8 @@ public record TemperatureCoefficient(double alphaVPerK, double minAlphaVPerK, do
      * @return {@code αV} (V/K)
      */
     public static double voltsPerKelvin(double relativePerK, double vzNomV) {
-        return relativePerK * vzNomV;
+        // In decimal: 0.085 %/K of 12 V is 0.0102 V/K, not 0.010199999999999999 (Decimals).
+        return Decimals.product(relativePerK, vzNomV);
     }
 
     /** A copy with the nominal moved to {@code alpha} (used by corners), keeping the range and the flag. */

@@ -1,5 +1,7 @@
 package org.tjmargin.variation;
 
+import org.tjmargin.units.Decimals;
+
 /**
  * A toleranced value: its nominal and the extremes it can take, in one SI unit.
  *
@@ -24,10 +26,14 @@ public record Range(double lo, double nominal, double hi) {
         return new Range(v, v, v);
     }
 
-    /** {@code nominal·(1 ± relative)}, for a positive nominal. */
+    /**
+     * {@code nominal·(1 ± relative)}, for a positive nominal: each end the double nearest to its decimal value
+     * ({@link Decimals#relativeEnds}), so that {@code 5 mA ± 10 %} runs from 4.5 mA, not from
+     * 4.5000000000000005 mA.
+     */
     public static Range relative(double nominal, double relative) {
-        double d = Math.abs(nominal) * relative;
-        return new Range(nominal - d, nominal, nominal + d);
+        double[] ends = Decimals.relativeEnds(nominal, relative);
+        return new Range(ends[0], nominal, ends[1]);
     }
 
     /** From {@code lo} to {@code hi} with the nominal in the middle. */
