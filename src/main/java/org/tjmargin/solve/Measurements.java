@@ -46,7 +46,9 @@ final class Measurements {
         if (inst.circuit() instanceof StandoffClamp c && spec.part().standoffV() > 0) {
             v.put(Measure.STANDOFF_RATIO, c.lineV() / spec.part().standoffV());
         }
-        for (SurgeResult s : surges) {
+        // By index: an iterator over the empty list that most corners have is an allocation at every corner.
+        for (int k = 0; k < surges.size(); k++) {
+            SurgeResult s = surges.get(k);
             v.max(Measure.SURGE_JUNCTION_TEMPERATURE, s.peakJunctionTemperatureK());
             v.max(Measure.SURGE_POWER_RATIO, s.powerRatio());
             if (s.clampVoltageRatio().isPresent()) {

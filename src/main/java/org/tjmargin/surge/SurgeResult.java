@@ -86,9 +86,10 @@ public record SurgeResult(String caseId, double startTjK, ClampTransientResult p
 
     /** True when any of {@code surges} {@linkplain #stoppedNumerically() stopped numerically}. */
     public static boolean anyStoppedNumerically(java.util.List<SurgeResult> surges) {
-        // A loop, not a stream: this runs for every corner at every ambient, most often on an empty list.
-        for (SurgeResult r : surges) {
-            if (r.stoppedNumerically()) {
+        // A loop by index, neither a stream nor an iterator: this runs for every corner at every ambient, most
+        // often on an empty list, and either allocated there.
+        for (int k = 0; k < surges.size(); k++) {
+            if (surges.get(k).stoppedNumerically()) {
                 return true;
             }
         }
