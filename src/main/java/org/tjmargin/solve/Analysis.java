@@ -74,10 +74,11 @@ public final class Analysis {
             overall = overall.worse(r.verdict());
         }
         // Every corner at the highest ambient is reported, so every one gets its loop gain (the sweep's solves
-        // compute it only for the hottest and least-current corner).
+        // compute it only for the hottest and least-current corner) and its surges' time histories (charted there
+        // only; the sweep's surge checks do not record them).
         List<BoardAtAmbient> reported = new java.util.ArrayList<>(sweep);
         int last = reported.size() - 1;
-        reported.set(last, BoardSolver.withEveryLoopGain(prepared, reported.get(last)));
+        reported.set(last, BoardSolver.reportedInFull(prepared, reported.get(last)));
         return new AnalysisResult(board, policy, reported, results, overall);
     }
 

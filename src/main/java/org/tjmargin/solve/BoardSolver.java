@@ -219,16 +219,26 @@ public final class BoardSolver {
     }
 
     /**
-     * The board with every corner's loop gain: for the design's highest ambient, where every corner is reported
-     * (results.json's corners at the highest ambient, the report's corner table).
+     * The board with every corner reported in full: each corner's loop gain and its surges' time histories, which
+     * the sweep's solves leave out. For the design's highest ambient, where every corner is reported (results.json's
+     * corners at the highest ambient, the report's corner table) and the surges are charted.
      */
-    static BoardAtAmbient withEveryLoopGain(PreparedBoard board, BoardAtAmbient b) {
+    static BoardAtAmbient reportedInFull(PreparedBoard board, BoardAtAmbient b) {
         List<PositionAtAmbient> positions = new ArrayList<>(b.positions().size());
         for (int i = 0; i < b.positions().size(); i++) {
             PositionAtAmbient p = b.positions().get(i);
             List<CornerPoint> corners = new ArrayList<>(p.corners());
+            List<PositionInstance> instances = board.instances().get(i);
+            PositionSpec spec = board.board().positions().get(i);
             for (int k = 0; k < corners.size(); k++) {
-                withLoopGain(corners, board.instances().get(i), k);
+                withLoopGain(corners, instances, k);
+                CornerPoint c = corners.get(k);
+                if (!c.surges().isEmpty() && c.point().isPresent()) {
+                    List<SurgeResult> full = SurgeChecks.withSeries(spec, instances.get(k), c.point().get(),
+                            c.surges());
+                    corners.set(k, new CornerPoint(c.corner(), c.outcome(), c.allowedPowerW(), c.resistorAllowedW(),
+                            full));
+                }
             }
             positions.add(new PositionAtAmbient(p.positionId(), p.ambientK(), p.tLocalK(), corners, p.hottestIndex(),
                     p.leastCurrentIndex(), p.worst(), p.margin(), p.limitingRuleId(), p.status()));

@@ -32,9 +32,12 @@ final class SurgeChecks {
      * Transient settings of every surge: the surge package's defaults (50 points per front) with a local tolerance of
      * 1e-3 instead of 1e-4: on the demo's surges the peak junction temperature moves by under 0.1 K and the rating
      * ratio by under 1e-4 relative, while the steps halve (margins are shown to 0.1 %, and a surge runs at every
-     * corner of every ambient).
+     * corner of every ambient). Without the time history: only the design's highest ambient is charted, and its
+     * corners get their histories afterwards ({@link #withSeries}), the same transients solved again with recording
+     * on.
      */
-    static final TransientSettings TRANSIENT = TransientSettings.defaults().withRelativeTolerance(1e-3);
+    static final TransientSettings TRANSIENT = TransientSettings.defaults().withRelativeTolerance(1e-3)
+            .withSeries(false);
     /** Peak search of the rating conversion: the thermal package's defaults. */
     static final FosterPeakSearch PEAK_SEARCH = FosterPeakSearch.defaults();
 
@@ -76,6 +79,24 @@ final class SurgeChecks {
     }
 
     static List<SurgeResult> at(PositionSpec spec, PositionInstance inst, OperatingPoint p) {
+        return at(spec, inst, p, TRANSIENT);
+    }
+
+    /**
+     * {@code surges}, the results of {@link #at} at {@code p}, with their time histories: the same transients
+     * solved again with recording on, which changes none of their numbers (tested), only fills the series the charts
+     * draw. {@code surges} itself where it is empty or already has them.
+     */
+    static List<SurgeResult> withSeries(PositionSpec spec, PositionInstance inst, OperatingPoint p,
+                                        List<SurgeResult> surges) {
+        if (surges.isEmpty() || surges.get(0).pulse().series().size() > 0) {
+            return surges;
+        }
+        return at(spec, inst, p, TRANSIENT.withSeries(true));
+    }
+
+    private static List<SurgeResult> at(PositionSpec spec, PositionInstance inst, OperatingPoint p,
+                                        TransientSettings settings) {
         if (spec.surges().isEmpty()) {
             return List.of();
         }
@@ -84,7 +105,7 @@ final class SurgeChecks {
         LinearClampLine line = LinearClampLine.of(inst.diode(), rd);
         List<SurgeResult> out = new ArrayList<>(s.cases().size());
         for (SurgeCase c : s.cases()) {
-            out.add(SurgeEvaluation.evaluate(c, s.rating(), line, p.tjK(), TRANSIENT, PEAK_SEARCH));
+            out.add(SurgeEvaluation.evaluate(c, s.rating(), line, p.tjK(), settings, PEAK_SEARCH));
         }
         return out;
     }

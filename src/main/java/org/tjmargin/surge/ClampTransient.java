@@ -113,7 +113,8 @@ public final class ClampTransient {
         private final TransientSettings settings;
         private final double duration;
         private final double[] x;
-        private final SeriesBuilder series = new SeriesBuilder();
+        /** The time history, or null where the settings do not keep it. */
+        private final SeriesBuilder series;
 
         private double opI;
         private double opV;
@@ -126,6 +127,8 @@ public final class ClampTransient {
         private double peakI;
         private double peakV = Double.NEGATIVE_INFINITY;
         private double peakP;
+        /** The largest power recorded, from 0 (the absolute value above serves the error control). */
+        private double maxP;
         /** Peaks estimated before stepping, for the error control's absolute floor. */
         private double referenceI;
         private double referenceP;
@@ -145,6 +148,7 @@ public final class ClampTransient {
             this.settings = settings;
             this.duration = duration;
             this.x = startRise.stageRiseK();
+            this.series = settings.keepsSeries() ? new SeriesBuilder() : null;
         }
 
         private void operate(double sourceValue, double tjK) {
@@ -167,10 +171,13 @@ public final class ClampTransient {
         }
 
         private void record(double t, double i, double v, double p, double tj) {
-            series.add(t, i, v, p, tj);
+            if (series != null) {
+                series.add(t, i, v, p, tj);
+            }
             peakI = Math.max(peakI, i);
             peakV = Math.max(peakV, v);
             peakP = Math.max(peakP, Math.abs(p));
+            maxP = Math.max(maxP, p);
             if (tj > peakTj) {
                 peakTj = tj;
                 peakTjTime = t;
@@ -299,8 +306,8 @@ public final class ClampTransient {
         }
 
         private ClampTransientResult result(double endTime) {
-            return new ClampTransientResult(series.build(), startTjK, peakI, peakV, peakTj, peakTjTime, energy, charge, action,
-                    steps, endTime, new FosterState(x));
+            return new ClampTransientResult(series != null ? series.build() : TransientSeries.empty(), startTjK, peakI,
+                    peakV, maxP, peakTj, peakTjTime, energy, charge, action, steps, endTime, new FosterState(x));
         }
 
         private double chordError(double mid, double a, double b, double peak) {

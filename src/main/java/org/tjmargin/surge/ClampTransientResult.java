@@ -8,10 +8,12 @@ import org.tjmargin.thermal.FosterState;
  * error is second order in the step). Integrals are trapezoidal over the grid, i.e. exact for the
  * piecewise-linear quantities the thermal model integrated.
  *
- * @param series                     the time history
+ * @param series                     the time history (empty where the settings did not keep it)
  * @param startJunctionTemperatureK  the steady-state junction temperature the surge started from (K)
  * @param peakCurrentA               largest clamp current (A)
  * @param peakClampVoltageV          largest clamp voltage (V)
+ * @param peakPowerW                 largest clamp dissipation (W), 0 when it never conducts: the largest power of
+ *                                   the series, also where the series is not kept
  * @param peakJunctionTemperatureK   largest junction temperature (K)
  * @param peakJunctionTimeS          its time (s)
  * @param energyJ                    {@code ∫ V·I dt} (J)
@@ -22,16 +24,16 @@ import org.tjmargin.thermal.FosterState;
  * @param finalRise                  the Foster network's stage rises at {@code endTimeS}
  */
 public record ClampTransientResult(TransientSeries series, double startJunctionTemperatureK, double peakCurrentA,
-        double peakClampVoltageV, double peakJunctionTemperatureK, double peakJunctionTimeS, double energyJ, double chargeC,
-        double actionIntegralA2s, int steps, double endTimeS, FosterState finalRise) {
+        double peakClampVoltageV, double peakPowerW, double peakJunctionTemperatureK, double peakJunctionTimeS,
+        double energyJ, double chargeC, double actionIntegralA2s, int steps, double endTimeS, FosterState finalRise) {
 
     public ClampTransientResult {
-        double[] values = {startJunctionTemperatureK, peakCurrentA, peakClampVoltageV, peakJunctionTemperatureK,
+        double[] values = {startJunctionTemperatureK, peakCurrentA, peakClampVoltageV, peakPowerW, peakJunctionTemperatureK,
             peakJunctionTimeS, energyJ, chargeC, actionIntegralA2s, endTimeS};
         for (double v : values) {
             if (!Double.isFinite(v)) {
                 throw new IllegalArgumentException("clamp transient result has a non-finite value: peak I = " + peakCurrentA
-                        + " A, peak V = " + peakClampVoltageV + " V, peak Tj = " + peakJunctionTemperatureK + " K, E = "
+                        + " A, peak V = " + peakClampVoltageV + " V, peak P = " + peakPowerW + " W, peak Tj = " + peakJunctionTemperatureK + " K, E = "
                         + energyJ + " J, Q = " + chargeC + " C, I²t = " + actionIntegralA2s + " A²s");
             }
         }

@@ -65,10 +65,7 @@ public final class SurgeEvaluation {
             average = pulse.energyJ() / surge.periodS();
             stopped = Optional.of(e.stop().reason());
         }
-        double peakP = 0;
-        for (double p : pulse.series().powerW()) {
-            peakP = Math.max(peakP, p);
-        }
+        double peakP = pulse.peakPowerW();
         FosterPulse applied = peakP > 0 && pulse.energyJ() > 0
                 ? FosterPulse.exponentialDecay(Math.log(2) * pulse.energyJ() / peakP)
                 : rating.ratedPulse();

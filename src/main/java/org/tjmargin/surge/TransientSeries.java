@@ -30,6 +30,12 @@ public record TransientSeries(double[] timeS, double[] currentA, double[] clampV
         junctionTemperatureK = junctionTemperatureK.clone();
     }
 
+    /** A series of no rows: what a transient solved without keeping its history reports. */
+    public static TransientSeries empty() {
+        double[] none = new double[0];
+        return new TransientSeries(none, none, none, none, none);
+    }
+
     @Override
     public double[] timeS() {
         return timeS.clone();

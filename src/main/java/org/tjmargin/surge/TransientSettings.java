@@ -12,9 +12,13 @@ package org.tjmargin.surge;
  * @param maxCouplingIterations fixed-point iterations allowed per step for the junction temperature
  * @param couplingToleranceK    the fixed point's stop: change of the junction temperature between iterations (K)
  * @param maxStepGrowth         the largest factor from one step to the next, above 1
+ * @param keepsSeries           whether the result keeps the time history ({@link ClampTransientResult#series()});
+ *                              without it the series is empty and every other number is the same (recording
+ *                              changes nothing in the computation). A surge checked at every corner of every
+ *                              ambient needs only its peaks and integrals; its history is for the charts.
  */
 public record TransientSettings(int pointsPerFront, double relativeTolerance, int maxSteps, int maxCouplingIterations,
-        double couplingToleranceK, double maxStepGrowth) {
+        double couplingToleranceK, double maxStepGrowth, boolean keepsSeries) {
 
     public TransientSettings {
         if (pointsPerFront < 2) {
@@ -38,24 +42,34 @@ public record TransientSettings(int pointsPerFront, double relativeTolerance, in
     /**
      * Defaults: 50 points per front (the brief's minimum), relative tolerance 1e-4 (energies then agree with
      * closed forms to about 1e-4), 200 000 steps (a load dump needs a few hundred), 50 coupling iterations (a
-     * few suffice: the per-step loop gain is small), coupling tolerance 1e-9 K, growth at most 2 per step.
+     * few suffice: the per-step loop gain is small), coupling tolerance 1e-9 K, growth at most 2 per step; the
+     * time history kept.
      */
     public static TransientSettings defaults() {
-        return new TransientSettings(50, 1e-4, 200_000, 50, 1e-9, 2.0);
+        return new TransientSettings(50, 1e-4, 200_000, 50, 1e-9, 2.0, true);
     }
 
     /** @return a copy with another number of points per front */
     public TransientSettings withPointsPerFront(int n) {
-        return new TransientSettings(n, relativeTolerance, maxSteps, maxCouplingIterations, couplingToleranceK, maxStepGrowth);
+        return new TransientSettings(n, relativeTolerance, maxSteps, maxCouplingIterations, couplingToleranceK, maxStepGrowth,
+                keepsSeries);
     }
 
     /** @return a copy with another relative tolerance */
     public TransientSettings withRelativeTolerance(double tol) {
-        return new TransientSettings(pointsPerFront, tol, maxSteps, maxCouplingIterations, couplingToleranceK, maxStepGrowth);
+        return new TransientSettings(pointsPerFront, tol, maxSteps, maxCouplingIterations, couplingToleranceK, maxStepGrowth,
+                keepsSeries);
     }
 
     /** @return a copy with another step budget */
     public TransientSettings withMaxSteps(int steps) {
-        return new TransientSettings(pointsPerFront, relativeTolerance, steps, maxCouplingIterations, couplingToleranceK, maxStepGrowth);
+        return new TransientSettings(pointsPerFront, relativeTolerance, steps, maxCouplingIterations, couplingToleranceK, maxStepGrowth,
+                keepsSeries);
+    }
+
+    /** @return a copy that keeps the time history or not */
+    public TransientSettings withSeries(boolean keep) {
+        return new TransientSettings(pointsPerFront, relativeTolerance, maxSteps, maxCouplingIterations, couplingToleranceK,
+                maxStepGrowth, keep);
     }
 }

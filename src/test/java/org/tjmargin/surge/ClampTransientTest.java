@@ -39,6 +39,42 @@ class ClampTransientTest {
         assertEquals(500, solve(ideal, new LinearClampLine(40, 0, 0)).peakCurrentA(), 1e-9 * 500);
     }
 
+    /**
+     * Keeping the time history is only recording: solved without it (as the sweep's surge checks do), a transient
+     * gives the same numbers bit for bit, an empty series, and its peak power is still the largest power the series
+     * would have held (0 when the clamp never conducts).
+     */
+    @Test
+    void withoutTheSeriesEveryNumberIsTheSame() {
+        CombinationWaveGenerator g = CombinationWaveGenerator.of(1000, CombinationWaveGenerator.Coupling.OTHER_LINES);
+        ClampLine warm = new LinearClampLine(30, 0.03, 0.2);
+        FosterNetwork two = FosterNetwork.of(new double[] {0.5, 3.0}, new double[] {1e-4, 5e-3});
+        SurgeSource[] sources = {g.source(), LoadDumpPulse.testA(LoadDumpSystem.TWELVE_VOLT, 87, 1, 0.2).source(),
+            CombinationWaveGenerator.of(20, CombinationWaveGenerator.Coupling.OTHER_LINES).source()};
+        for (SurgeSource source : sources) {
+            for (TransientSettings with : new TransientSettings[] {TransientSettings.defaults(),
+                TransientSettings.defaults().withRelativeTolerance(1e-3)}) {
+                ClampTransientResult kept = ClampTransient.solve(source, warm, two, T25 + 40, with).resultOrThrow();
+                ClampTransientResult bare = ClampTransient.solve(source, warm, two, T25 + 40, with.withSeries(false))
+                        .resultOrThrow();
+                assertEquals(0, bare.series().size());
+                assertTrue(kept.series().size() > 2);
+                assertEquals(new ClampTransientResult(kept.series(), bare.startJunctionTemperatureK(),
+                        bare.peakCurrentA(), bare.peakClampVoltageV(), bare.peakPowerW(),
+                        bare.peakJunctionTemperatureK(), bare.peakJunctionTimeS(), bare.energyJ(), bare.chargeC(),
+                        bare.actionIntegralA2s(), bare.steps(), bare.endTimeS(), bare.finalRise()), kept);
+                double largest = 0;
+                for (double p : kept.series().powerW()) {
+                    largest = Math.max(largest, p);
+                }
+                assertEquals(largest, kept.peakPowerW());
+            }
+        }
+        // a 20 V surge into a 30 V clamp never conducts
+        assertEquals(0.0, ClampTransient.solve(sources[2], warm, two, T25, TransientSettings.defaults())
+                .resultOrThrow().peakPowerW());
+    }
+
     @Test
     void clampVoltageFollowsTheLineWithDynamicResistance() {
         // V = Vbr + Rd·I with I = (Voc − Vbr)/(Zs + Rd) at the peak (Kirchhoff, reference 4.2's circuit)
