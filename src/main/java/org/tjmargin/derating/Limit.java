@@ -16,8 +16,8 @@ public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.Lower
         LOCAL_AIR
     }
 
-    /** The limit for this context (SI, the rule's unit). */
-    double valueFor(RuleContext context);
+    /** The limit for this point (SI, the rule's unit). */
+    double valueFor(RuleInputs context);
 
     /**
      * A readable form in the rule's display unit, e.g. {@code Tj max − 40 K}, {@code 125.0 °C}, {@code 0.5}.
@@ -45,7 +45,7 @@ public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.Lower
         }
 
         @Override
-        public double valueFor(RuleContext context) {
+        public double valueFor(RuleInputs context) {
             return value;
         }
 
@@ -68,7 +68,7 @@ public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.Lower
         }
 
         @Override
-        public double valueFor(RuleContext context) {
+        public double valueFor(RuleInputs context) {
             return context.tjMaxK() - marginK;
         }
 
@@ -88,7 +88,7 @@ public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.Lower
      */
     record LowerOf(Limit a, Limit b) implements Limit {
         @Override
-        public double valueFor(RuleContext context) {
+        public double valueFor(RuleInputs context) {
             return Math.min(a.valueFor(context), b.valueFor(context));
         }
 
@@ -136,7 +136,7 @@ public sealed interface Limit permits Limit.Fixed, Limit.BelowTjMax, Limit.Lower
         }
 
         @Override
-        public double valueFor(RuleContext context) {
+        public double valueFor(RuleInputs context) {
             double t = context.temperatureK(basis);
             int n = temperaturesK.length;
             if (t <= temperaturesK[0]) {

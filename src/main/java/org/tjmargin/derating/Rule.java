@@ -42,7 +42,7 @@ public record Rule(String id, String title, Measure measure, Bound bound, Limit 
     }
 
     /** As {@link #check}, with {@code null} for a quantity that does not apply (no Optional per rule per corner). */
-    RuleCheck checkOrNull(RuleContext context) {
+    RuleCheck checkOrNull(RuleInputs context) {
         double actual = context.valueOrNaN(measure);
         if (Double.isNaN(actual)) {
             return null;

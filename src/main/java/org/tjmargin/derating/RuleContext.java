@@ -12,24 +12,13 @@ import java.util.OptionalDouble;
  * @param referenceK temperature of the part's rating reference point (K)
  * @param tLocalK    temperature of the air around the part (K)
  */
-public record RuleContext(Map<Measure, Double> values, double tjMaxK, double referenceK, double tLocalK) {
+public record RuleContext(Map<Measure, Double> values, double tjMaxK, double referenceK, double tLocalK)
+        implements RuleInputs {
 
     public RuleContext {
         // Array-backed and immutable: lookups by ordinal, no hashing or boxing (this runs for every rule of every
         // corner). Values built by a MeasureValues.Builder are taken as they are.
         values = MeasureValues.copyOf(values);
-    }
-
-    /** The temperature a temperature-dependent limit is read at. */
-    public double temperatureK(Limit.Basis basis) {
-        return switch (basis) {
-            case JUNCTION -> {
-                double tj = valueOrNaN(Measure.JUNCTION_TEMPERATURE);
-                yield Double.isNaN(tj) ? referenceK : tj;
-            }
-            case REFERENCE -> referenceK;
-            case LOCAL_AIR -> tLocalK;
-        };
     }
 
     /** The value of {@code m}, if it applies here. */
@@ -38,7 +27,7 @@ public record RuleContext(Map<Measure, Double> values, double tjMaxK, double ref
         return Double.isNaN(v) ? OptionalDouble.empty() : OptionalDouble.of(v);
     }
 
-    /** The value of {@code m}, or {@code NaN} where it does not apply (values held are always finite). */
+    @Override
     public double valueOrNaN(Measure m) {
         return ((MeasureValues) values).valueOrNaN(m);
     }

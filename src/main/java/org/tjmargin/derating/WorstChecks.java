@@ -44,10 +44,10 @@ public final class WorstChecks {
     /**
      * Holds every rule that applies to {@code context} (its measure present) against it.
      *
-     * @param context     one corner's values
+     * @param context     one corner's values (a {@link CornerReadings} refilled per corner, or a {@link RuleContext})
      * @param cornerIndex that corner's index, reported with the rule's worst check
      */
-    public void add(RuleContext context, int cornerIndex) {
+    public void add(RuleInputs context, int cornerIndex) {
         for (int i = 0; i < seen.length; i++) {
             Rule r = rules.get(i);
             double a = context.valueOrNaN(r.measure());

@@ -3,7 +3,7 @@ package org.tjmargin.solve;
 import java.util.ArrayList;
 import java.util.List;
 import org.tjmargin.derating.Policy;
-import org.tjmargin.derating.RuleContext;
+import org.tjmargin.derating.CornerReadings;
 import org.tjmargin.derating.WorstChecks;
 import org.tjmargin.surge.SurgeResult;
 import org.tjmargin.thermal.Enclosure;
@@ -146,12 +146,14 @@ public final class BoardSolver {
         double leastI = Double.POSITIVE_INFINITY;
         PointStatus status = PointStatus.CONVERGED;
         WorstChecks worst = new WorstChecks(policy);
+        // One set of readings refilled at every corner (a context per corner was most of the check's garbage).
+        CornerReadings readings = new CornerReadings();
         double resistorAllowed = spec.resistorAllowedW(tLocalK);
         boolean[] surgeAt = SurgeChecks.cornersToEvaluate(spec, instances, outcomes);
         for (int k = 0; k < instances.size(); k++) {
             PositionInstance inst = instances.get(k);
             ThermalOutcome out = outcomes.get(k);
-            RuleContext ctx;
+            CornerReadings ctx;
             List<SurgeResult> surges = List.of();
             double allowed = 0;
             if (out instanceof ThermalOutcome.Converged c) {
@@ -164,7 +166,7 @@ public final class BoardSolver {
                     // shown. Runaway within the pulse is a physical answer: its peak Tj fails the surge rules.
                     status = status.worse(PointStatus.NOT_CONVERGED);
                 }
-                ctx = Measurements.of(spec, inst, p, allowed, resistorAllowed, surges);
+                ctx = Measurements.fill(readings, spec, inst, p, allowed, resistorAllowed, surges);
                 if (!hottestRunaway && p.tjK() > hottestTj) {
                     hottestTj = p.tjK();
                     hottest = k;
@@ -174,14 +176,14 @@ public final class BoardSolver {
                     least = k;
                 }
             } else if (out instanceof ThermalOutcome.Runaway r) {
-                ctx = Measurements.unresolved(spec, r.capK(), tLocalK);
+                ctx = Measurements.unresolved(readings, spec, r.capK(), tLocalK);
                 status = status.worse(PointStatus.RUNAWAY);
                 if (!hottestRunaway) {
                     hottestRunaway = true;
                     hottest = k;
                 }
             } else {
-                ctx = Measurements.unresolved(spec, ((ThermalOutcome.NotConverged) out).lastTjK(), tLocalK);
+                ctx = Measurements.unresolved(readings, spec, ((ThermalOutcome.NotConverged) out).lastTjK(), tLocalK);
                 status = status.worse(PointStatus.NOT_CONVERGED);
             }
             worst.add(ctx, k);

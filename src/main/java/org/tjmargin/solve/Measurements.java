@@ -4,7 +4,7 @@ import java.util.List;
 import org.tjmargin.circuit.ShuntRegulatorSpec;
 import org.tjmargin.circuit.StandoffClamp;
 import org.tjmargin.derating.Measure;
-import org.tjmargin.derating.MeasureValues;
+import org.tjmargin.derating.CornerReadings;
 import org.tjmargin.derating.RuleContext;
 import org.tjmargin.surge.SurgeResult;
 
@@ -32,7 +32,13 @@ final class Measurements {
      */
     static RuleContext of(PositionSpec spec, PositionInstance inst, OperatingPoint p, double allowedW,
                           double resistorAllowedW, List<SurgeResult> surges) {
-        MeasureValues.Builder v = MeasureValues.builder();
+        return fill(new CornerReadings(), spec, inst, p, allowedW, resistorAllowedW, surges).toContext();
+    }
+
+    /** As {@link #of}, into {@code into} (refilled: the policy check of a position reuses one for its corners). */
+    static CornerReadings fill(CornerReadings into, PositionSpec spec, PositionInstance inst, OperatingPoint p,
+                               double allowedW, double resistorAllowedW, List<SurgeResult> surges) {
+        CornerReadings v = into.reset(spec.part().ratings().tjMaxK(), p.referenceK(), p.tLocalK());
         v.put(Measure.JUNCTION_TEMPERATURE, p.tjK());
         v.put(Measure.POWER_RATIO, ratio(p.diodePowerW(), allowedW));
         double iz = p.circuit().diodeCurrentA();
@@ -55,13 +61,17 @@ final class Measurements {
                 v.max(Measure.CLAMP_VOLTAGE_RATIO, s.clampVoltageRatio().getAsDouble());
             }
         }
-        return new RuleContext(v.build(), spec.part().ratings().tjMaxK(), p.referenceK(), p.tLocalK());
+        return v;
     }
 
     /** What rules see of a corner without an operating point: the junction at the last temperature reached. */
     static RuleContext unresolved(PositionSpec spec, double tjK, double tLocalK) {
-        return new RuleContext(MeasureValues.builder().put(Measure.JUNCTION_TEMPERATURE, tjK).build(), spec.part().ratings().tjMaxK(), tjK,
-                tLocalK);
+        return unresolved(new CornerReadings(), spec, tjK, tLocalK).toContext();
+    }
+
+    /** As {@link #unresolved(PositionSpec, double, double)}, into {@code into}. */
+    static CornerReadings unresolved(CornerReadings into, PositionSpec spec, double tjK, double tLocalK) {
+        return into.reset(spec.part().ratings().tjMaxK(), tjK, tLocalK).put(Measure.JUNCTION_TEMPERATURE, tjK);
     }
 
     private static double ratio(double actual, double allowed) {

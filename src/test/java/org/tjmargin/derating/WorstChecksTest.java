@@ -16,7 +16,9 @@ import org.tjmargin.design.ProfileLoader;
  * {@link WorstChecks} against its definition: {@link Policy#check} at every corner, reduced to each rule's least
  * margin (first corner on a tie) in a map kept in insertion order, which is what the sweep did before. Seeded random
  * corners, each with a random subset of the quantities (as unresolved corners and surge-free corners have), held
- * against every shipped profile with the built-in minimum.
+ * against every shipped profile with the built-in minimum. The gathering reads each corner from one
+ * {@link CornerReadings} refilled corner after corner, as the sweep does; the reference from a fresh
+ * {@link RuleContext} per corner.
  */
 class WorstChecksTest {
 
@@ -33,6 +35,7 @@ class WorstChecksTest {
             for (int position = 0; position < 300; position++) {
                 int corners = 1 + rnd.nextInt(24);
                 WorstChecks fast = new WorstChecks(policy);
+                CornerReadings readings = new CornerReadings();
                 Map<String, RuleCheck> byRule = new LinkedHashMap<>();
                 Map<String, Integer> cornerOf = new LinkedHashMap<>();
                 for (int k = 0; k < corners; k++) {
@@ -47,7 +50,13 @@ class WorstChecksTest {
                     }
                     double tLocal = 260 + 10 * rnd.nextInt(10);
                     RuleContext ctx = new RuleContext(values, 423.15, tLocal + 5, tLocal);
-                    fast.add(ctx, k);
+                    readings.reset(423.15, tLocal + 5, tLocal);
+                    values.forEach(readings::put);
+                    assertEquals(ctx, readings.toContext());
+                    for (Limit.Basis basis : Limit.Basis.values()) {
+                        assertEquals(ctx.temperatureK(basis), readings.temperatureK(basis));
+                    }
+                    fast.add(readings, k);
                     for (RuleCheck rc : policy.check(ctx)) {
                         RuleCheck w = byRule.get(rc.ruleId());
                         if (w == null || rc.margin() < w.margin()) {
