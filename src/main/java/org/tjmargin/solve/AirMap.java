@@ -544,8 +544,9 @@ final class AirMap implements AutoCloseable {
         IntStream.range(0, n).parallel().forEach(i -> {
             CornerHeat.Heat hottest = null;
             PositionInstance at = null;
+            HeatBalance balance = new HeatBalance();
             for (PositionInstance inst : board.instances().get(i)) {
-                CornerHeat.Heat h = CornerHeat.heatInAir(inst, x, settings);
+                CornerHeat.Heat h = CornerHeat.heatInAir(inst, x, settings, balance);
                 if (hottest == null || h.totalW() > hottest.totalW()) {
                     hottest = h;
                     at = inst;

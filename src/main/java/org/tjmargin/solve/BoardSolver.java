@@ -124,8 +124,9 @@ public final class BoardSolver {
     static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
                                       double ambientK, double tLocalK, SolverSettings settings) {
         List<ThermalOutcome> outcomes = new ArrayList<>(instances.size());
+        HeatBalance balance = new HeatBalance();
         for (PositionInstance inst : instances) {
-            outcomes.add(inst.solveWithoutLoopGain(tLocalK, settings));
+            outcomes.add(inst.solveWithoutLoopGain(tLocalK, settings, balance));
         }
         return evaluate(spec, instances, policy, ambientK, tLocalK, settings, outcomes);
     }
@@ -253,11 +254,12 @@ public final class BoardSolver {
     private static double boardHeatW(PreparedBoard board, double tLocalK, SolverSettings settings, LastHeat last) {
         double sum = 0;
         List<List<ThermalOutcome>> all = new ArrayList<>(board.instances().size());
+        HeatBalance balance = new HeatBalance();
         for (List<PositionInstance> insts : board.instances()) {
             double max = 0;
             List<ThermalOutcome> outs = new ArrayList<>(insts.size());
             for (PositionInstance inst : insts) {
-                ThermalOutcome out = inst.solveWithoutLoopGain(tLocalK, settings);
+                ThermalOutcome out = inst.solveWithoutLoopGain(tLocalK, settings, balance);
                 outs.add(out);
                 max = Math.max(max, CornerHeat.of(inst, out, settings));
             }

@@ -2,7 +2,6 @@ package org.tjmargin.solve;
 
 import org.tjmargin.circuit.CircuitPoint;
 import org.tjmargin.circuit.CircuitState;
-import org.tjmargin.device.PreparedDiode;
 
 /**
  * The heat one corner of a position puts into the enclosure air (diode plus series resistor), as the board's air
@@ -34,6 +33,11 @@ final class CornerHeat {
         return heatInAir(inst, tLocalK, settings).totalW();
     }
 
+    /** As above, evaluating through {@code balance}, a caller's reusable map (one per thread). */
+    static double inAir(PositionInstance inst, double tLocalK, SolverSettings settings, HeatBalance balance) {
+        return heatInAir(inst, tLocalK, settings, balance).totalW();
+    }
+
     /**
      * A corner's heat in air at {@code tLocalK}, with what a floor of its heat in hotter air needs (see
      * {@link AirMap.HeatFloor}).
@@ -47,22 +51,16 @@ final class CornerHeat {
 
     /** As {@link #inAir}, with the diode's share and the outcome. */
     static Heat heatInAir(PositionInstance inst, double tLocalK, SolverSettings settings) {
-        final double rTheta = inst.path().rThetaJaKPerW();
-        // The instance's prepared constants (equal results, see PreparedDiode); Circuit.at(BreakdownDiode, …) would
-        // prepare them at every evaluation.
-        final PreparedDiode prepared = inst.prepared();
-        // Every evaluation is solved into one state; it holds the last one when the search returns.
-        final CircuitState last = new CircuitState();
-        final double[] lastTj = {Double.NaN};
-        FixedPointOutcome outcome = LowestFixedPoint.find(tj -> {
-            inst.circuit().solve(prepared, tj, last);
-            lastTj[0] = tj;
-            return ElectroThermalSolver.junctionK(tLocalK, rTheta, last.diodePowerW());
-        }, tLocalK, settings);
+        return heatInAir(inst, tLocalK, settings, new HeatBalance());
+    }
+
+    /** As above, evaluating through {@code balance}, a caller's reusable map (one per thread). */
+    static Heat heatInAir(PositionInstance inst, double tLocalK, SolverSettings settings, HeatBalance balance) {
+        // The instance's prepared constants (equal results, see PreparedDiode), one map and one state for every
+        // evaluation; the state holds the last one when the search returns.
+        FixedPointOutcome outcome = LowestFixedPoint.find(balance.aim(inst, tLocalK), tLocalK, settings);
         if (outcome instanceof FixedPointOutcome.Root r) {
-            if (lastTj[0] != r.x()) {
-                inst.circuit().solve(prepared, r.x(), last);
-            }
+            CircuitState last = balance.stateAt(r.x());
             return new Heat(last.diodePowerW() + last.resistorPowerW(), last.diodePowerW(), PointStatus.CONVERGED);
         }
         if (outcome instanceof FixedPointOutcome.Runaway) {

@@ -306,8 +306,9 @@ final class CoupledSweep {
             double[] h = new double[insts.size()];
             double m = 0;
             int hottest = 0;
+            HeatBalance balance = new HeatBalance();
             for (int k = 0; k < insts.size(); k++) {
-                ThermalOutcome o = insts.get(k).solveWithoutLoopGain(tLocalK, settings);
+                ThermalOutcome o = insts.get(k).solveWithoutLoopGain(tLocalK, settings, balance);
                 outs.add(o);
                 h[k] = CornerHeat.of(insts.get(k), o, settings);
                 if (h[k] > m) {
@@ -338,8 +339,9 @@ final class CoupledSweep {
         IntStream.range(0, subsets.length).parallel().forEach(i -> {
             List<PositionInstance> insts = board.instances().get(i);
             double m = 0;
+            HeatBalance balance = new HeatBalance();
             for (int k : subsets[i]) {
-                m = Math.max(m, CornerHeat.inAir(insts.get(k), tLocalK, settings));
+                m = Math.max(m, CornerHeat.inAir(insts.get(k), tLocalK, settings, balance));
             }
             max[i] = m;
         });

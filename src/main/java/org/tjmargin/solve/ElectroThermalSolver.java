@@ -2,7 +2,6 @@ package org.tjmargin.solve;
 
 import org.tjmargin.circuit.Circuit;
 import org.tjmargin.circuit.CircuitPoint;
-import org.tjmargin.circuit.CircuitState;
 import org.tjmargin.device.BreakdownDiode;
 import org.tjmargin.device.PreparedDiode;
 import org.tjmargin.thermal.SteadyThermalPath;
@@ -49,20 +48,24 @@ public final class ElectroThermalSolver {
      */
     static ThermalOutcome solve(Circuit circuit, PreparedDiode prepared, SteadyThermalPath path, double tLocalK,
                                 SolverSettings settings, boolean loopGain) {
+        return solve(circuit, prepared, path, tLocalK, settings, loopGain, new HeatBalance());
+    }
+
+    /**
+     * As above, evaluating through {@code balance} (reused by a caller that solves many corners on one thread; its
+     * previous aim is forgotten).
+     */
+    static ThermalOutcome solve(Circuit circuit, PreparedDiode prepared, SteadyThermalPath path, double tLocalK,
+                                SolverSettings settings, boolean loopGain, HeatBalance balance) {
         final double rTheta = path.rThetaJaKPerW();
-        // Every evaluation is solved into one state (no point allocated per evaluation). The search's root is always
-        // its last evaluation (LowestFixedPoint), so the state holds the root's point when the search returns; the
-        // loop gain's two evaluations come after it, into a state of their own.
-        final CircuitState now = new CircuitState();
-        final double[] nowTj = {Double.NaN};
-        FixedPointOutcome outcome = LowestFixedPoint.find(tj -> {
-            circuit.solve(prepared, tj, now);
-            nowTj[0] = tj;
-            return junctionK(tLocalK, rTheta, now.diodePowerW());
-        }, tLocalK, settings);
+        // Every evaluation is solved into the balance's one state (no point allocated per evaluation). The search's
+        // root is always its last evaluation (LowestFixedPoint), so the state holds the root's point when the search
+        // returns; the loop gain's two evaluations come after it, into a state of their own.
+        balance.aim(circuit, prepared, rTheta, tLocalK);
+        FixedPointOutcome outcome = LowestFixedPoint.find(balance, tLocalK, settings);
         if (outcome instanceof FixedPointOutcome.Root r) {
-            boolean kept = nowTj[0] == r.x();
-            CircuitPoint cp = kept ? now.point() : circuit.at(prepared, r.x());
+            boolean kept = balance.lastTjK() == r.x();
+            CircuitPoint cp = kept ? balance.state().point() : circuit.at(prepared, r.x());
             double refK = path.referenceTemperatureK(r.x(), cp.diodePowerW());
             // The gain as the search with loopGain computes it (the same two evaluations at the root, the same
             // count): LowestFixedPoint.loopGain.
@@ -110,10 +113,6 @@ public final class ElectroThermalSolver {
     /** The loop gain of the heat balance's map at {@code tjK}: {@link LowestFixedPoint#loopGain}'s two evaluations. */
     private static double loopGainAt(Circuit circuit, PreparedDiode prepared, double rTheta, double tLocalK,
                                      double tjK) {
-        CircuitState s = new CircuitState();
-        return LowestFixedPoint.loopGain(tj -> {
-            circuit.solve(prepared, tj, s);
-            return junctionK(tLocalK, rTheta, s.diodePowerW());
-        }, tjK);
+        return LowestFixedPoint.loopGain(new HeatBalance().aim(circuit, prepared, rTheta, tLocalK), tjK);
     }
 }

@@ -54,4 +54,9 @@ public record PositionInstance(Corner corner, BreakdownDiode diode, Circuit circ
     ThermalOutcome solveWithoutLoopGain(double tLocalK, SolverSettings settings) {
         return ElectroThermalSolver.solve(circuit, prepared, path, tLocalK, settings, false);
     }
+
+    /** As above, evaluating through {@code balance}, a caller's reusable map (one per thread). */
+    ThermalOutcome solveWithoutLoopGain(double tLocalK, SolverSettings settings, HeatBalance balance) {
+        return ElectroThermalSolver.solve(circuit, prepared, path, tLocalK, settings, false, balance);
+    }
 }
