@@ -1,6 +1,7 @@
 package org.tjmargin.solve;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.tjmargin.derating.Policy;
 import org.tjmargin.derating.CornerReadings;
@@ -123,12 +124,21 @@ public final class BoardSolver {
     /** Every corner of one position in air at {@code tLocalK}, held against the policy. */
     static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
                                       double ambientK, double tLocalK, SolverSettings settings) {
+        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, true);
+    }
+
+    /**
+     * As above, keeping every corner or only the reported ones ({@link #evaluate(PositionSpec, List, Policy, double,
+     * double, SolverSettings, List, boolean)}): the searches read only the status and the margin.
+     */
+    static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
+                                      double ambientK, double tLocalK, SolverSettings settings, boolean everyCorner) {
         List<ThermalOutcome> outcomes = new ArrayList<>(instances.size());
         HeatBalance balance = new HeatBalance();
         for (PositionInstance inst : instances) {
             outcomes.add(inst.solveWithoutLoopGain(tLocalK, settings, balance));
         }
-        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, outcomes);
+        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, outcomes, everyCorner);
     }
 
     /**
@@ -139,7 +149,23 @@ public final class BoardSolver {
     static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
                                               double ambientK, double tLocalK, SolverSettings settings,
                                               List<ThermalOutcome> outcomes) {
-        List<CornerPoint> corners = new ArrayList<>(instances.size());
+        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, outcomes, true);
+    }
+
+    /**
+     * As above; without {@code everyCorner} the point keeps only its reported corners, exactly what
+     * {@code evaluate(...).reportedOnly()} gives ({@link PositionAtAmbient#reportedOnly()}: the hottest, the
+     * least-current and each rule's worst, renumbered, with the count and envelope of all), built without a corner
+     * point for every corner and a full point to thin out: what the sweep keeps below the design's highest ambient
+     * and what the searches read.
+     */
+    static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
+                                      double ambientK, double tLocalK, SolverSettings settings,
+                                      List<ThermalOutcome> outcomes, boolean everyCorner) {
+        int n = instances.size();
+        double[] allowedAt = new double[n];
+        List<List<SurgeResult>> surgesAt = new ArrayList<>(n);
+        CornerEnvelope.Accumulator envelope = new CornerEnvelope.Accumulator();
         int hottest = -1;
         double hottestTj = Double.NEGATIVE_INFINITY;
         boolean hottestRunaway = false;
@@ -151,16 +177,17 @@ public final class BoardSolver {
         CornerReadings readings = new CornerReadings();
         double resistorAllowed = spec.resistorAllowedW(tLocalK);
         boolean[] surgeAt = SurgeChecks.cornersToEvaluate(spec, instances, outcomes);
-        for (int k = 0; k < instances.size(); k++) {
+        for (int k = 0; k < n; k++) {
             PositionInstance inst = instances.get(k);
             ThermalOutcome out = outcomes.get(k);
+            envelope.add(out);
             CornerReadings ctx;
             List<SurgeResult> surges = List.of();
             double allowed = 0;
             if (out instanceof ThermalOutcome.Converged c) {
                 OperatingPoint p = c.point();
                 allowed = spec.allowedPowerW(p);
-                surges = surgeAt[k] ? SurgeChecks.at(spec, inst, p) : List.of();
+                surges = surgeAt[k] ? List.copyOf(SurgeChecks.at(spec, inst, p)) : List.of();
                 if (SurgeResult.anyStoppedNumerically(surges)) {
                     // A surge transient that stopped for numerical reasons gives partial values only: the position
                     // has no answer the tool can stand behind (exit status 3), though its other checks are still
@@ -188,25 +215,60 @@ public final class BoardSolver {
                 status = status.worse(PointStatus.NOT_CONVERGED);
             }
             worst.add(ctx, k);
-            corners.add(new CornerPoint(inst.corner(), out, allowed, resistorAllowed, surges));
+            allowedAt[k] = allowed;
+            surgesAt.add(surges);
         }
-        // The reported corners get their loop gain (the solves above may have skipped it).
-        withLoopGain(corners, instances, hottest);
-        withLoopGain(corners, instances, least);
-        List<WorstCheck> worstByRule = new ArrayList<>();
-        for (WorstChecks.Worst w : worst.worst()) {
-            worstByRule.add(new WorstCheck(w.check(), w.cornerIndex()));
-        }
+        List<WorstChecks.Worst> worstOfRules = worst.worst();
         double margin = 1.0;
         String limiting = "none";
-        for (WorstCheck w : worstByRule) {
+        for (WorstChecks.Worst w : worstOfRules) {
             if (w.check().margin() < margin || "none".equals(limiting)) {
                 margin = w.check().margin();
                 limiting = w.check().ruleId();
             }
         }
-        return new PositionAtAmbient(spec.id(), ambientK, tLocalK, corners, hottest, least,
-                worstByRule, margin, limiting, status);
+        // The corners kept, in their order: every one, or the reported ones (the hottest, the least-current and
+        // each rule's worst); each kept corner's new index, -1 for one dropped.
+        int[] renumbered = new int[n];
+        if (everyCorner) {
+            for (int k = 0; k < n; k++) {
+                renumbered[k] = k;
+            }
+        } else {
+            Arrays.fill(renumbered, -1);
+            keep(renumbered, hottest);
+            keep(renumbered, least);
+            for (WorstChecks.Worst w : worstOfRules) {
+                keep(renumbered, w.cornerIndex());
+            }
+        }
+        List<CornerPoint> corners = new ArrayList<>();
+        for (int k = 0; k < n; k++) {
+            if (renumbered[k] < 0) {
+                continue;
+            }
+            renumbered[k] = corners.size();
+            ThermalOutcome out = outcomes.get(k);
+            if (k == hottest || k == least) {
+                // The reported corners get their loop gain (the solves above may have skipped it).
+                out = ElectroThermalSolver.withLoopGain(instances.get(k), out);
+            }
+            corners.add(new CornerPoint(instances.get(k).corner(), out, allowedAt[k], resistorAllowed,
+                    surgesAt.get(k)));
+        }
+        List<WorstCheck> worstByRule = new ArrayList<>(worstOfRules.size());
+        for (WorstChecks.Worst w : worstOfRules) {
+            worstByRule.add(new WorstCheck(w.check(), renumbered[w.cornerIndex()]));
+        }
+        return new PositionAtAmbient(spec.id(), ambientK, tLocalK, corners, hottest < 0 ? -1 : renumbered[hottest],
+                least < 0 ? -1 : renumbered[least], worstByRule, margin, limiting, status, n, envelope.envelope());
+    }
+
+    /** Marks corner {@code index} as kept ({@code index < 0}: none). */
+    private static void keep(int[] renumbered, int index) {
+        if (index >= 0) {
+            renumbered[index] = 0;
+        }
     }
 
     /** Corner {@code k} of {@code corners} with its loop gain ({@code k < 0}: none). */

@@ -20,14 +20,25 @@ public record CornerEnvelope(double tjMinK, double tjMaxK, double outputMinV, do
 
     /** The envelope of {@code corners}' converged points. */
     public static CornerEnvelope of(List<CornerPoint> corners) {
-        double tjLo = Double.POSITIVE_INFINITY;
-        double tjHi = Double.NEGATIVE_INFINITY;
-        double vLo = Double.POSITIVE_INFINITY;
-        double vHi = Double.NEGATIVE_INFINITY;
-        double rMax = Double.NEGATIVE_INFINITY;
-        double hMax = Double.NEGATIVE_INFINITY;
+        Accumulator a = new Accumulator();
         for (CornerPoint c : corners) {
-            if (c.outcome() instanceof ThermalOutcome.Converged cv) {
+            a.add(c.outcome());
+        }
+        return a.envelope();
+    }
+
+    /** Gathers the envelope outcome by outcome, for a caller that keeps no list of its corners. Not thread-safe. */
+    static final class Accumulator {
+        private double tjLo = Double.POSITIVE_INFINITY;
+        private double tjHi = Double.NEGATIVE_INFINITY;
+        private double vLo = Double.POSITIVE_INFINITY;
+        private double vHi = Double.NEGATIVE_INFINITY;
+        private double rMax = Double.NEGATIVE_INFINITY;
+        private double hMax = Double.NEGATIVE_INFINITY;
+
+        /** Takes in one corner's outcome (only a converged one counts). */
+        void add(ThermalOutcome outcome) {
+            if (outcome instanceof ThermalOutcome.Converged cv) {
                 OperatingPoint p = cv.point();
                 tjLo = Math.min(tjLo, p.tjK());
                 tjHi = Math.max(tjHi, p.tjK());
@@ -38,10 +49,14 @@ public record CornerEnvelope(double tjMinK, double tjMaxK, double outputMinV, do
                 hMax = Math.max(hMax, p.heatW());
             }
         }
-        if (tjHi == Double.NEGATIVE_INFINITY) {
-            return new CornerEnvelope(Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+
+        /** The envelope of the outcomes taken in so far. */
+        CornerEnvelope envelope() {
+            if (tjHi == Double.NEGATIVE_INFINITY) {
+                return new CornerEnvelope(Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+            }
+            return new CornerEnvelope(tjLo, tjHi, vLo, vHi, rMax, hMax);
         }
-        return new CornerEnvelope(tjLo, tjHi, vLo, vHi, rMax, hMax);
     }
 
     /** True when at least one corner converged. */

@@ -277,10 +277,9 @@ final class CoupledSweep {
     private static PositionAtAmbient held(PreparedBoard board, Policy policy, double ta, double tLocalK,
                                           SolverSettings settings, List<ThermalOutcome> outcomes, int i,
                                           boolean highest) {
-        PositionAtAmbient p = BoardSolver.evaluate(board.board().positions().get(i), board.instances().get(i), policy,
-                ta, tLocalK, settings, outcomes);
         // Below the highest ambient a position keeps only its reported corners (PositionAtAmbient).
-        return highest ? p : p.reportedOnly();
+        return BoardSolver.evaluate(board.board().positions().get(i), board.instances().get(i), policy, ta, tLocalK,
+                settings, outcomes, highest);
     }
 
     /**

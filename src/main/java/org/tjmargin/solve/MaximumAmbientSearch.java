@@ -144,8 +144,9 @@ public final class MaximumAmbientSearch {
         if (local.status() != PointStatus.CONVERGED) {
             return -1.0;
         }
+        // Only the status and the margin are read: the point keeps its reported corners alone.
         PositionAtAmbient p = BoardSolver.evaluate(board.board().positions().get(index), board.instances().get(index),
-                policy, ambientK, local.tLocalK(), settings);
+                policy, ambientK, local.tLocalK(), settings, false);
         if (p.status() != PointStatus.CONVERGED) {
             return Math.min(p.margin(), -1.0);
         }

@@ -83,6 +83,44 @@ class ReportedCornersTest {
         assertTrue(points.stream().anyMatch(op -> op.heatW() == e.heatMaxW()), at);
     }
 
+    /**
+     * The point the sweep and the searches build with only its reported corners is, record for record, the full
+     * point thinned out by {@link PositionAtAmbient#reportedOnly()}: same corners (with their loop gains), same
+     * renumbered indices, checks, margin, status, count and envelope. Airs from the sweep's coldest to 60 K above
+     * its hottest, where some clamps run away.
+     */
+    @Test
+    void builtWithItsReportedCornersAloneIsTheFullPointThinnedOut() {
+        Random rnd = new Random(20_261_204L);
+        int compared = 0;
+        int thinned = 0;
+        for (int n = 0; n < 20; n++) {
+            Board board = n == 0 ? DesignLoader.load(Path.of("demo/design.yaml")).board()
+                    : RandomCoupledBoards.draw(rnd, "board " + n);
+            PreparedBoard prepared = PreparedBoard.of(board);
+            for (int probe = 0; probe < 4; probe++) {
+                double air = board.ambient().minK() + (board.ambient().maxK() + 60 - board.ambient().minK())
+                        * rnd.nextDouble();
+                for (int i = 0; i < board.positions().size(); i++) {
+                    PositionSpec spec = board.positions().get(i);
+                    List<PositionInstance> insts = prepared.instances().get(i);
+                    PositionAtAmbient full = BoardSolver.evaluate(spec, insts, POLICY, air - 5, air,
+                            SolverSettings.DEFAULT, true);
+                    PositionAtAmbient reported = BoardSolver.evaluate(spec, insts, POLICY, air - 5, air,
+                            SolverSettings.DEFAULT, false);
+                    String at = "board " + n + " " + spec.id() + " in air at " + air;
+                    assertTrue(full.keepsEveryCorner(), at);
+                    assertEquals(full.reportedOnly(), reported, at);
+                    if (!reported.keepsEveryCorner()) {
+                        thinned++;
+                    }
+                    compared++;
+                }
+            }
+        }
+        assertTrue(compared > 150 && thinned > 100, compared + " compared, " + thinned + " thinned");
+    }
+
     @Test
     void theSweepKeepsEveryCornerOnlyAtTheHighestAmbient() {
         for (Board board : List.of(DesignLoader.load(Path.of("demo/design.yaml")).board(),
