@@ -124,21 +124,21 @@ public final class BoardSolver {
     /** Every corner of one position in air at {@code tLocalK}, held against the policy. */
     static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
                                       double ambientK, double tLocalK, SolverSettings settings) {
-        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, true);
+        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, CornersKept.EVERY);
     }
 
     /**
      * As above, keeping every corner or only the reported ones ({@link #evaluate(PositionSpec, List, Policy, double,
-     * double, SolverSettings, List, boolean)}): the searches read only the status and the margin.
+     * double, SolverSettings, List, CornersKept)}): the searches read only the status and the margin.
      */
     static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
-                                      double ambientK, double tLocalK, SolverSettings settings, boolean everyCorner) {
+                                      double ambientK, double tLocalK, SolverSettings settings, CornersKept kept) {
         List<ThermalOutcome> outcomes = new ArrayList<>(instances.size());
         HeatBalance balance = new HeatBalance();
         for (PositionInstance inst : instances) {
             outcomes.add(inst.solveWithoutLoopGain(tLocalK, settings, balance));
         }
-        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, outcomes, everyCorner);
+        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, outcomes, kept);
     }
 
     /**
@@ -149,11 +149,11 @@ public final class BoardSolver {
     static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
                                               double ambientK, double tLocalK, SolverSettings settings,
                                               List<ThermalOutcome> outcomes) {
-        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, outcomes, true);
+        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, outcomes, CornersKept.EVERY);
     }
 
     /**
-     * As above; without {@code everyCorner} the point keeps only its reported corners, exactly what
+     * As above; with {@link CornersKept#REPORTED} the point keeps only its reported corners, exactly what
      * {@code evaluate(...).reportedOnly()} gives ({@link PositionAtAmbient#reportedOnly()}: the hottest, the
      * least-current and each rule's worst, renumbered, with the count and envelope of all), built without a corner
      * point for every corner and a full point to thin out: what the sweep keeps below the design's highest ambient
@@ -161,7 +161,7 @@ public final class BoardSolver {
      */
     static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
                                       double ambientK, double tLocalK, SolverSettings settings,
-                                      List<ThermalOutcome> outcomes, boolean everyCorner) {
+                                      List<ThermalOutcome> outcomes, CornersKept kept) {
         int n = instances.size();
         double[] allowedAt = new double[n];
         List<List<SurgeResult>> surgesAt = new ArrayList<>(n);
@@ -230,17 +230,11 @@ public final class BoardSolver {
         // The corners kept, in their order: every one, or the reported ones (the hottest, the least-current and
         // each rule's worst); each kept corner's new index, -1 for one dropped.
         int[] renumbered = new int[n];
-        if (everyCorner) {
-            for (int k = 0; k < n; k++) {
-                renumbered[k] = k;
-            }
-        } else {
-            Arrays.fill(renumbered, -1);
-            keep(renumbered, hottest);
-            keep(renumbered, least);
-            for (WorstChecks.Worst w : worstOfRules) {
-                keep(renumbered, w.cornerIndex());
-            }
+        Arrays.fill(renumbered, kept.startMark);
+        keep(renumbered, hottest);
+        keep(renumbered, least);
+        for (WorstChecks.Worst w : worstOfRules) {
+            keep(renumbered, w.cornerIndex());
         }
         List<CornerPoint> corners = new ArrayList<>();
         for (int k = 0; k < n; k++) {

@@ -136,12 +136,12 @@ final class CoupledSweep {
         for (int a = 0; a < ambients.length; a++) {
             double ta = ambients[a];
             // Below the highest ambient a position keeps only its reported corners (PositionAtAmbient).
-            boolean highest = a == ambients.length - 1;
+            CornersKept kept = CornersKept.every(a == ambients.length - 1);
             int evaluations = 0;
             Pass pass;
             double rise0;
             if (previous == null) {
-                pass = fullPass(board, ta, settings, policy, ta, highest);
+                pass = fullPass(board, ta, settings, policy, ta, kept);
                 evaluations++;
                 rise0 = 0.0;
             } else {
@@ -169,7 +169,7 @@ final class CoupledSweep {
                 if (out instanceof FixedPointOutcome.Root r) {
                     rise = r.x();
                     if (pass.tLocalK() != ta + rise) {
-                        pass = fullPass(board, ta + rise, settings, policy, ta, highest);
+                        pass = fullPass(board, ta + rise, settings, policy, ta, kept);
                         evaluations++;
                     }
                     if (pass.hottestIn(s)) {
@@ -187,7 +187,7 @@ final class CoupledSweep {
             }
             double tLocal = ta + rise;
             if (pass.tLocalK() != tLocal) {
-                pass = fullPass(board, tLocal, settings, policy, ta, highest);
+                pass = fullPass(board, tLocal, settings, policy, ta, kept);
                 evaluations++;
             }
             final Pass at = pass;
@@ -195,7 +195,7 @@ final class CoupledSweep {
             // over from the previous ambient was held for that ambient and is held again here.
             List<PositionAtAmbient> positions = at.ambientK() == ta ? at.positions()
                     : IntStream.range(0, board.instances().size()).parallel()
-                            .mapToObj(i -> held(board, policy, ta, tLocal, settings, at.outcomes().get(i), i, highest))
+                            .mapToObj(i -> held(board, policy, ta, tLocal, settings, at.outcomes().get(i), i, kept))
                             .toList();
             PointStatus status = air;
             for (PositionAtAmbient p : positions) {
@@ -276,10 +276,9 @@ final class CoupledSweep {
     /** Position {@code i} held against the policy at ambient {@code ta} in air {@code tLocalK}, as the sweep keeps it. */
     private static PositionAtAmbient held(PreparedBoard board, Policy policy, double ta, double tLocalK,
                                           SolverSettings settings, List<ThermalOutcome> outcomes, int i,
-                                          boolean highest) {
-        // Below the highest ambient a position keeps only its reported corners (PositionAtAmbient).
+                                          CornersKept kept) {
         return BoardSolver.evaluate(board.board().positions().get(i), board.instances().get(i), policy, ta, tLocalK,
-                settings, outcomes, highest);
+                settings, outcomes, kept);
     }
 
     /**
@@ -289,7 +288,7 @@ final class CoupledSweep {
      * is still in the cache instead of in a second pass over the whole board.
      */
     private static Pass fullPass(PreparedBoard board, double tLocalK, SolverSettings settings, Policy policy,
-                                 double ta, boolean highest) {
+                                 double ta, CornersKept kept) {
         int n = board.instances().size();
         @SuppressWarnings("unchecked")
         List<ThermalOutcome>[] outcomes = new List[n];
@@ -322,7 +321,7 @@ final class CoupledSweep {
             runaway[i] = o instanceof ThermalOutcome.Runaway ? m : 0.0;
             diode[i] = o instanceof ThermalOutcome.Converged c ? c.point().diodePowerW() : 0.0;
             perKelvin[i] = 1.0 / insts.get(hottest).path().rThetaJaKPerW();
-            held[i] = held(board, policy, ta, tLocalK, settings, outs, i, highest);
+            held[i] = held(board, policy, ta, tLocalK, settings, outs, i, kept);
         });
         double sum = 0;
         for (double m : max) {

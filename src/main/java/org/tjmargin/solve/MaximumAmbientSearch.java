@@ -146,7 +146,7 @@ public final class MaximumAmbientSearch {
         }
         // Only the status and the margin are read: the point keeps its reported corners alone.
         PositionAtAmbient p = BoardSolver.evaluate(board.board().positions().get(index), board.instances().get(index),
-                policy, ambientK, local.tLocalK(), settings, false);
+                policy, ambientK, local.tLocalK(), settings, CornersKept.REPORTED);
         if (p.status() != PointStatus.CONVERGED) {
             return Math.min(p.margin(), -1.0);
         }

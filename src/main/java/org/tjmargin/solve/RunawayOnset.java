@@ -44,7 +44,7 @@ public record RunawayOnset(double ambientK, boolean atOrBelowSearch) {
                 return local.status() == PointStatus.RUNAWAY;
             }
             return BoardSolver.evaluate(board.board().positions().get(index), board.instances().get(index), policy, t,
-                    local.tLocalK(), settings, false).status() == PointStatus.RUNAWAY;
+                    local.tLocalK(), settings, CornersKept.REPORTED).status() == PointStatus.RUNAWAY;
         }, MaximumAmbientSearch.TOLERANCE_K - AirMap.TOLERANCE_K);
     }
 

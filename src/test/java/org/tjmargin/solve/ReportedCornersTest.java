@@ -105,9 +105,9 @@ class ReportedCornersTest {
                     PositionSpec spec = board.positions().get(i);
                     List<PositionInstance> insts = prepared.instances().get(i);
                     PositionAtAmbient full = BoardSolver.evaluate(spec, insts, POLICY, air - 5, air,
-                            SolverSettings.DEFAULT, true);
+                            SolverSettings.DEFAULT, CornersKept.EVERY);
                     PositionAtAmbient reported = BoardSolver.evaluate(spec, insts, POLICY, air - 5, air,
-                            SolverSettings.DEFAULT, false);
+                            SolverSettings.DEFAULT, CornersKept.REPORTED);
                     String at = "board " + n + " " + spec.id() + " in air at " + air;
                     assertTrue(full.keepsEveryCorner(), at);
                     assertEquals(full.reportedOnly(), reported, at);
