@@ -12,10 +12,8 @@ import java.util.Arrays;
  */
 public final class CornerReadings implements RuleInputs {
 
-    private static final Measure[] MEASURES = Measure.values();
-
     /** {@code NaN} where the measure is absent (a held value is never NaN). */
-    private final double[] byOrdinal = new double[MEASURES.length];
+    private final double[] byOrdinal = new double[Measure.values().length];
     private double tjMaxK = Double.NaN;
     private double referenceK = Double.NaN;
     private double tLocalK = Double.NaN;
@@ -78,15 +76,14 @@ public final class CornerReadings implements RuleInputs {
         return tLocalK;
     }
 
+    /** The values held now, as an immutable copy. */
+    public MeasureValues values() {
+        return MeasureValues.wrapping(byOrdinal.clone());
+    }
+
     /** The immutable context holding these readings now. */
     public RuleContext toContext() {
-        MeasureValues.Builder b = MeasureValues.builder();
-        for (int i = 0; i < byOrdinal.length; i++) {
-            if (!Double.isNaN(byOrdinal[i])) {
-                b.put(MEASURES[i], byOrdinal[i]);
-            }
-        }
-        return new RuleContext(b.build(), tjMaxK, referenceK, tLocalK);
+        return new RuleContext(values(), tjMaxK, referenceK, tLocalK);
     }
 
     private static double finite(Measure m, double value) {

@@ -2,7 +2,6 @@ package org.tjmargin.derating;
 
 import java.util.AbstractMap;
 import java.util.AbstractSet;
-import java.util.Arrays;
 import java.util.Iterator;
 import java.util.Map;
 import java.util.NoSuchElementException;
@@ -33,16 +32,16 @@ public final class MeasureValues extends AbstractMap<Measure, Double> {
         if (map instanceof MeasureValues m) {
             return m;
         }
-        Builder b = new Builder();
+        CornerReadings r = new CornerReadings();
         for (Map.Entry<Measure, Double> e : map.entrySet()) {
-            b.put(e.getKey(), e.getValue());
+            r.put(e.getKey(), e.getValue());
         }
-        return b.build();
+        return r.values();
     }
 
-    /** A builder with no values. */
-    public static Builder builder() {
-        return new Builder();
+    /** The values of {@code byOrdinal} (NaN where absent; every other value finite), taken as they are. */
+    static MeasureValues wrapping(double[] byOrdinal) {
+        return new MeasureValues(byOrdinal);
     }
 
     /** The value of {@code m}, or {@code NaN} where it does not apply. */
@@ -114,49 +113,5 @@ public final class MeasureValues extends AbstractMap<Measure, Double> {
                 return MeasureValues.this.size();
             }
         };
-    }
-
-    /** Collects the values of one point; each builder builds once. */
-    public static final class Builder {
-
-        private double[] byOrdinal = new double[MEASURES.length];
-
-        private Builder() {
-            Arrays.fill(byOrdinal, Double.NaN);
-        }
-
-        /**
-         * Sets {@code m} to {@code value}.
-         *
-         * @throws IllegalArgumentException when {@code value} is not finite
-         */
-        public Builder put(Measure m, double value) {
-            byOrdinal[m.ordinal()] = finite(m, value);
-            return this;
-        }
-
-        /** Sets {@code m} to the larger of its value so far (if any) and {@code value}, which must be finite. */
-        public Builder max(Measure m, double value) {
-            double old = byOrdinal[m.ordinal()];
-            byOrdinal[m.ordinal()] = Double.isNaN(old) ? finite(m, value) : Math.max(old, finite(m, value));
-            return this;
-        }
-
-        /** The values collected. */
-        public MeasureValues build() {
-            if (byOrdinal == null) {
-                throw new IllegalStateException("this builder has already built its values");
-            }
-            MeasureValues m = new MeasureValues(byOrdinal);
-            byOrdinal = null;
-            return m;
-        }
-
-        private static double finite(Measure m, double value) {
-            if (!Double.isFinite(value)) {
-                throw new IllegalArgumentException(m + " must be finite, got " + value);
-            }
-            return value;
-        }
     }
 }

@@ -17,7 +17,7 @@ public record RuleContext(Map<Measure, Double> values, double tjMaxK, double ref
 
     public RuleContext {
         // Array-backed and immutable: lookups by ordinal, no hashing or boxing (this runs for every rule of every
-        // corner). Values built by a MeasureValues.Builder are taken as they are.
+        // corner). Values that already are MeasureValues (CornerReadings.values) are taken as they are.
         values = MeasureValues.copyOf(values);
     }
 

@@ -24,7 +24,7 @@ class MeasureValuesTest {
         Measure[] all = Measure.values();
         for (int n = 0; n < 500; n++) {
             EnumMap<Measure, Double> plain = new EnumMap<>(Measure.class);
-            MeasureValues.Builder b = MeasureValues.builder();
+            CornerReadings b = new CornerReadings();
             for (Measure m : all) {
                 if (rnd.nextBoolean()) {
                     double v = (rnd.nextDouble() - 0.5) * 1e3;
@@ -32,7 +32,7 @@ class MeasureValuesTest {
                     b.put(m, v);
                 }
             }
-            MeasureValues values = b.build();
+            MeasureValues values = b.values();
             String where = "seed " + seed + " case " + n;
             assertEquals(plain, values, where);
             assertEquals(values, plain, where);
@@ -51,11 +51,11 @@ class MeasureValuesTest {
     @Test
     void largestOfSeveralAndOnlyFiniteValues() {
         // Surge quantities are the worst over the position's surges: merge by maximum, as Map.merge(…, Math::max).
-        MeasureValues v = MeasureValues.builder().max(Measure.SURGE_POWER_RATIO, 0.4)
-                .max(Measure.SURGE_POWER_RATIO, 0.9).max(Measure.SURGE_POWER_RATIO, 0.7).build();
+        MeasureValues v = new CornerReadings().max(Measure.SURGE_POWER_RATIO, 0.4)
+                .max(Measure.SURGE_POWER_RATIO, 0.9).max(Measure.SURGE_POWER_RATIO, 0.7).values();
         assertEquals(Map.of(Measure.SURGE_POWER_RATIO, 0.9), v);
         assertThrows(IllegalArgumentException.class,
-                () -> MeasureValues.builder().put(Measure.POWER_RATIO, Double.NaN));
+                () -> new CornerReadings().put(Measure.POWER_RATIO, Double.NaN));
         assertThrows(IllegalArgumentException.class,
                 () -> new RuleContext(Map.of(Measure.JUNCTION_TEMPERATURE, Double.POSITIVE_INFINITY), 450, 300, 300));
     }
