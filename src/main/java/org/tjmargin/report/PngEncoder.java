@@ -36,17 +36,29 @@ final class PngEncoder {
      * @return the PNG file's bytes
      */
     static byte[] encode(BufferedImage image) {
+        return encode(image, new byte[scanlineBytes(image.getWidth(), image.getHeight())]);
+    }
+
+    /**
+     * As above, with the scanlines laid out in {@code raw} (a caller's reusable buffer of at least
+     * {@link #scanlineBytes} bytes; every byte encoded is written first).
+     */
+    static byte[] encode(BufferedImage image, byte[] raw) {
         if (image.getType() != BufferedImage.TYPE_INT_RGB) {
             throw new IllegalArgumentException("only TYPE_INT_RGB images are encoded, got type " + image.getType());
         }
         int w = image.getWidth();
         int h = image.getHeight();
+        if (raw.length < scanlineBytes(w, h)) {
+            throw new IllegalArgumentException("scanline buffer of " + raw.length + " bytes for a " + w + " × " + h
+                    + " image, which needs " + scanlineBytes(w, h));
+        }
         int[] pixels = ((DataBufferInt) image.getRaster().getDataBuffer()).getData();
         // Each scanline: its filter-type byte (0, none) and R, G, B per pixel (§7.2, §9.2).
         int stride = 1 + 3 * w;
-        byte[] raw = new byte[stride * h];
         for (int y = 0; y < h; y++) {
             int p = y * w;
+            raw[y * stride] = 0;
             int q = y * stride + 1;
             for (int x = 0; x < w; x++) {
                 int rgb = pixels[p + x];
@@ -58,7 +70,7 @@ final class PngEncoder {
         ByteArrayOutputStream z = new ByteArrayOutputStream(64 * 1024);
         Deflater deflater = new Deflater(LEVEL);
         try {
-            deflater.setInput(raw);
+            deflater.setInput(raw, 0, stride * h);
             deflater.finish();
             byte[] buf = new byte[IDAT_CHUNK];
             while (!deflater.finished()) {
@@ -82,6 +94,11 @@ final class PngEncoder {
         }
         chunk(out, "IEND", new byte[0], 0, 0);
         return out.toByteArray();
+    }
+
+    /** Bytes of the scanlines of a {@code w × h} image: a filter-type byte and three bytes a pixel per row. */
+    static int scanlineBytes(int w, int h) {
+        return (1 + 3 * w) * h;
     }
 
     /** One chunk: length, type, data, and the CRC-32 of type and data (§5.3). */

@@ -1,5 +1,6 @@
 package org.tjmargin.report;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -120,6 +121,28 @@ class ChartSetTest {
         RenderedChart again = ChartRenderer.render("D1-margin", ChartKind.MARGIN,
                 ChartSet.build(MIXED, 0, ChartKind.MARGIN), ChartSize.DEFAULT);
         assertEquals(CHARTS.get(0).svg(), again.svg());
+    }
+
+    /**
+     * A thread draws its PNGs into one image it clears and reuses: every chart comes out as it does drawn into a new
+     * image, whatever was drawn there before (charts of several kinds and sizes in turn on this thread).
+     */
+    @Test
+    void aReusedImageDrawsAsANewOne() {
+        ChartSize wide = new ChartSize(1000, 500);
+        for (ChartSize size : List.of(ChartSize.DEFAULT, wide, ChartSize.DEFAULT)) {
+            for (ChartKind kind : List.of(ChartKind.MARGIN, ChartKind.RATING, ChartKind.OPERATING, ChartKind.RESISTOR)) {
+                RenderedChart reused = ChartRenderer.render("D1-" + kind.suffix(), kind, ChartSet.build(MIXED, 0, kind),
+                        size);
+                java.awt.image.BufferedImage fresh = new java.awt.image.BufferedImage(size.widthPx(), size.heightPx(),
+                        java.awt.image.BufferedImage.TYPE_INT_RGB);
+                java.awt.Graphics2D g2 = fresh.createGraphics();
+                ChartSet.build(MIXED, 0, kind).draw(g2, new java.awt.geom.Rectangle2D.Double(0, 0, size.widthPx(),
+                        size.heightPx()));
+                g2.dispose();
+                assertArrayEquals(PngEncoder.encode(fresh), reused.png(), kind + " at " + size);
+            }
+        }
     }
 
     @Test

@@ -70,6 +70,28 @@ class PngEncoderTest {
         }
     }
 
+    /** A reused scanline buffer, left full of another image's bytes (or of noise), encodes as a new one does. */
+    @Test
+    void aReusedBufferEncodesAsANewOne() {
+        Random rnd = new Random(20261204L);
+        byte[] raw = new byte[PngEncoder.scanlineBytes(300, 200)];
+        for (int n = 0; n < 6; n++) {
+            rnd.nextBytes(raw);
+            int w = 1 + rnd.nextInt(300);
+            int h = 1 + rnd.nextInt(200);
+            BufferedImage img = new BufferedImage(w, h, BufferedImage.TYPE_INT_RGB);
+            Graphics2D g = img.createGraphics();
+            g.setColor(new Color(rnd.nextInt()));
+            g.fillRect(0, 0, w / 2, h);
+            g.setColor(new Color(rnd.nextInt()));
+            g.fill(new Ellipse2D.Double(0, 0, w, h));
+            g.dispose();
+            assertArrayEquals(PngEncoder.encode(img), PngEncoder.encode(img, raw), "image " + n);
+        }
+        assertThrows(IllegalArgumentException.class,
+                () -> PngEncoder.encode(new BufferedImage(400, 4, BufferedImage.TYPE_INT_RGB), new byte[10]));
+    }
+
     @Test
     void onlyOpaqueRgbImages() {
         assertThrows(IllegalArgumentException.class,
