@@ -122,15 +122,14 @@ public final class SweepCsv {
         out.text(texts.later(role));
         out.text(texts.label(c.corner()));
         if (op == null) {
-            out.text(texts.later(""));
-            out.text(texts.later(""));
-            out.text(texts.later(""));
-            out.text(texts.later(""));
-            out.text(texts.later(""));
-            out.text(texts.later(""));
+            // No operating point: its six quantities empty, the allowed power, then loop gain and iterations empty.
+            byte[] empty = texts.later("");
+            for (int f = 0; f < 6; f++) {
+                out.text(empty);
+            }
             out.number(num(c.allowedPowerW()));
-            out.text(texts.later(""));
-            out.text(texts.later(""));
+            out.text(empty);
+            out.text(empty);
         } else {
             out.number(num(Labels.celsius(op.tjK())));
             out.number(num(Labels.celsius(op.referenceK())));

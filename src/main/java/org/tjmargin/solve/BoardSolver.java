@@ -117,19 +117,14 @@ public final class BoardSolver {
         PositionSpec spec = board.board().positions().get(i);
         List<PositionInstance> instances = board.instances().get(i);
         List<ThermalOutcome> solved = air.outcomesOf(i);
-        return solved != null ? evaluate(spec, instances, policy, ambientK, tLocalK, settings, solved)
-                : evaluate(spec, instances, policy, ambientK, tLocalK, settings);
-    }
-
-    /** Every corner of one position in air at {@code tLocalK}, held against the policy. */
-    static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
-                                      double ambientK, double tLocalK, SolverSettings settings) {
-        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, CornersKept.EVERY);
+        return solved != null ? evaluate(spec, instances, policy, ambientK, tLocalK, settings, solved,
+                CornersKept.EVERY) : evaluate(spec, instances, policy, ambientK, tLocalK, settings, CornersKept.EVERY);
     }
 
     /**
-     * As above, keeping every corner or only the reported ones ({@link #evaluate(PositionSpec, List, Policy, double,
-     * double, SolverSettings, List, CornersKept)}): the searches read only the status and the margin.
+     * Every corner of one position solved in air at {@code tLocalK} and held against the policy, the point keeping
+     * every corner or only the reported ones ({@link #evaluate(PositionSpec, List, Policy, double, double,
+     * SolverSettings, List, CornersKept)}): the searches read only the status and the margin.
      */
     static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
                                       double ambientK, double tLocalK, SolverSettings settings, CornersKept kept) {
@@ -142,18 +137,13 @@ public final class BoardSolver {
     }
 
     /**
-     * As above, with the corners' outcomes in this air already solved (by the air balance or the caller). The solves
-     * stay out of this method so that it has no branch that one caller takes and another never does: the optimising
-     * compiler would otherwise compile it for the sweep's callers and throw that away at the first search probe.
-     */
-    static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
-                                              double ambientK, double tLocalK, SolverSettings settings,
-                                              List<ThermalOutcome> outcomes) {
-        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, outcomes, CornersKept.EVERY);
-    }
-
-    /**
-     * As above; with {@link CornersKept#REPORTED} the point keeps only its reported corners, exactly what
+     * One position held against the policy in air at {@code tLocalK}, with its corners' outcomes in this air already
+     * solved (by the air balance or the caller). The solves stay out of this method so that it has no branch that one
+     * caller takes and another never does: the optimising compiler would otherwise compile it for the sweep's callers
+     * and throw that away at the first search probe (which corners are kept is read without a branch, see
+     * {@link CornersKept}).
+     *
+     * <p>With {@link CornersKept#REPORTED} the point keeps only its reported corners, exactly what
      * {@code evaluate(...).reportedOnly()} gives ({@link PositionAtAmbient#reportedOnly()}: the hottest, the
      * least-current and each rule's worst, renumbered, with the count and envelope of all), built without a corner
      * point for every corner and a full point to thin out: what the sweep keeps below the design's highest ambient
@@ -187,7 +177,7 @@ public final class BoardSolver {
             if (out instanceof ThermalOutcome.Converged c) {
                 OperatingPoint p = c.point();
                 allowed = spec.allowedPowerW(p);
-                surges = surgeAt[k] ? List.copyOf(SurgeChecks.at(spec, inst, p)) : List.of();
+                surges = surgeAt[k] ? SurgeChecks.at(spec, inst, p) : List.of();
                 if (SurgeResult.anyStoppedNumerically(surges)) {
                     // A surge transient that stopped for numerical reasons gives partial values only: the position
                     // has no answer the tool can stand behind (exit status 3), though its other checks are still

@@ -65,7 +65,7 @@ public final class ElectroThermalSolver {
         FixedPointOutcome outcome = LowestFixedPoint.find(balance, tLocalK, settings);
         if (outcome instanceof FixedPointOutcome.Root r) {
             boolean kept = balance.lastTjK() == r.x();
-            CircuitPoint cp = kept ? balance.state().point() : circuit.at(prepared, r.x());
+            CircuitPoint cp = balance.stateAt(r.x()).point();
             double refK = path.referenceTemperatureK(r.x(), cp.diodePowerW());
             // The gain as the search with loopGain computes it (the same two evaluations at the root, the same
             // count): LowestFixedPoint.loopGain.

@@ -68,9 +68,4 @@ final class HeatBalance implements DoubleUnaryOperator {
     double lastTjK() {
         return lastTjK;
     }
-
-    /** @return the state of the last evaluation */
-    CircuitState state() {
-        return state;
-    }
 }

@@ -107,6 +107,6 @@ final class SurgeChecks {
         for (SurgeCase c : s.cases()) {
             out.add(SurgeEvaluation.evaluate(c, s.rating(), line, p.tjK(), settings, PEAK_SEARCH));
         }
-        return out;
+        return List.copyOf(out);
     }
 }

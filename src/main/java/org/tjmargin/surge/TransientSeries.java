@@ -30,10 +30,12 @@ public record TransientSeries(double[] timeS, double[] currentA, double[] clampV
         junctionTemperatureK = junctionTemperatureK.clone();
     }
 
+    private static final TransientSeries EMPTY = new TransientSeries(new double[0], new double[0], new double[0],
+            new double[0], new double[0]);
+
     /** A series of no rows: what a transient solved without keeping its history reports. */
     public static TransientSeries empty() {
-        double[] none = new double[0];
-        return new TransientSeries(none, none, none, none, none);
+        return EMPTY;
     }
 
     @Override

@@ -28,8 +28,7 @@ class ReportedCornersTest {
         int compared = 0;
         int dropped = 0;
         for (int n = 0; n < 12; n++) {
-            Board board = n == 0 ? DesignLoader.load(Path.of("demo/design.yaml")).board()
-                    : RandomCoupledBoards.draw(rnd, "board " + n);
+            Board board = demoThenRandom(n, rnd);
             PreparedBoard prepared = PreparedBoard.of(board);
             double[] ambients = board.ambient().temperaturesK();
             for (double ta : new double[] {ambients[0], ambients[ambients.length / 2]}) {
@@ -61,6 +60,12 @@ class ReportedCornersTest {
         }
         assertTrue(compared > 50, "only " + compared + " points compared");
         assertTrue(dropped > 100, "only " + dropped + " corners dropped: the test does not exercise the renumbering");
+    }
+
+    /** The demo first, then seeded random coupled boards. */
+    private static Board demoThenRandom(int n, Random rnd) {
+        return n == 0 ? DesignLoader.load(Path.of("demo/design.yaml")).board()
+                : RandomCoupledBoards.draw(rnd, "board " + n);
     }
 
     /** Every converged corner lies within the envelope and each of its bounds is some corner's value. */
@@ -95,8 +100,7 @@ class ReportedCornersTest {
         int compared = 0;
         int thinned = 0;
         for (int n = 0; n < 20; n++) {
-            Board board = n == 0 ? DesignLoader.load(Path.of("demo/design.yaml")).board()
-                    : RandomCoupledBoards.draw(rnd, "board " + n);
+            Board board = demoThenRandom(n, rnd);
             PreparedBoard prepared = PreparedBoard.of(board);
             for (int probe = 0; probe < 4; probe++) {
                 double air = board.ambient().minK() + (board.ambient().maxK() + 60 - board.ambient().minK())

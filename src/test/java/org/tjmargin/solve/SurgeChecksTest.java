@@ -90,7 +90,7 @@ class SurgeChecksTest {
     void positionsWithoutSurgesRunNone() {
         Board board = DesignLoader.load(Path.of("demo/design.yaml")).board();
         PositionAtAmbient d3 = BoardSolver.evaluate(board.positions().get(2), PreparedBoard.of(board).instances().get(2),
-                Policy.builtInMinimum(), 328.15, 330, SolverSettings.DEFAULT);
+                Policy.builtInMinimum(), 328.15, 330, SolverSettings.DEFAULT, CornersKept.EVERY);
         assertTrue(d3.corners().stream().allMatch(c -> c.surges().isEmpty()));
         assertTrue(d3.worst().stream().noneMatch(w -> w.check().measure().isSurge()));
     }
