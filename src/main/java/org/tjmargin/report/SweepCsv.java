@@ -22,6 +22,8 @@ import org.tjmargin.variation.Corner;
 /**
  * {@code sweep.csv}: one row per position, ambient and reported corner (the hottest and the least-current), for
  * spreadsheets and plotting. Units in the column names; temperatures in °C. Quoting by Commons CSV (RFC 4180).
+ * Where the enclosure air has no balance (it runs away), {@code tLocalC} and {@code enclosureRiseK} are empty and
+ * every position's rows say {@code RUNAWAY}.
  */
 public final class SweepCsv {
 
@@ -80,11 +82,13 @@ public final class SweepCsv {
         // each is written once and its text reused.
         Repeated ambient = new Repeated();
         Repeated air = new Repeated();
-        String rise = num(b.enclosureRiseK());
+        // Air without a balance has no temperature: both fields stay empty (BoardAtAmbient#airBalanced).
+        boolean balanced = b.airBalanced();
+        String rise = balanced ? num(b.enclosureRiseK()) : "";
         for (PositionAtAmbient p : b.positions()) {
             boolean same = p.hottestIndex() == p.leastCurrentIndex();
             String amb = ambient.num(Labels.celsius(p.ambientK()));
-            String local = air.num(Labels.celsius(p.tLocalK()));
+            String local = balanced ? air.num(Labels.celsius(p.tLocalK())) : "";
             if (p.hottest().isPresent()) {
                 row(out, texts, amb, local, rise, p, same ? "hottest,least-current" : "hottest", p.hottest().get());
             }

@@ -107,7 +107,9 @@ public final class Analysis {
             MaximumAmbient max = MaximumAmbientSearch.find(prepared, policy, i, sweep, settings, map);
             RunawayOnset onset = RunawayOnset.find(prepared, policy, i, sweep, settings, map);
             BoardAtAmbient hottest = sweep.get(sweep.size() - 1);
-            Optional<Regulation> reg = Regulation.of(spec, hottest.positions().get(i).tLocalK(), settings);
+            // Where the air at the highest ambient has no balance, there is no air to regulate in.
+            Optional<Regulation> reg = hottest.airBalanced()
+                    ? Regulation.of(spec, hottest.positions().get(i).tLocalK(), settings) : Optional.empty();
             return new PositionResult(spec.id(), v, limiting, worst, worstT, max, Optional.ofNullable(onset), reg,
                     spec.allNotes());
         }

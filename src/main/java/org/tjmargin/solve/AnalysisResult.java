@@ -19,6 +19,11 @@ public record AnalysisResult(Board board, Policy policy, List<BoardAtAmbient> sw
         positions = List.copyOf(positions);
     }
 
+    /** Where the enclosure air itself runs away, if it does in the sweep ({@link EnclosureRunaway#of}). */
+    public java.util.Optional<EnclosureRunaway> enclosureRunaway() {
+        return EnclosureRunaway.of(positions);
+    }
+
     /** The board at the design's highest ambient (the last sweep point). */
     public BoardAtAmbient atMaximumAmbient() {
         return sweep.get(sweep.size() - 1);

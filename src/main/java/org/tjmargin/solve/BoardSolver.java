@@ -46,12 +46,14 @@ public final class BoardSolver {
         PointStatus status = air.status();
         double heat = 0;
         for (int i = 0; i < board.board().positions().size(); i++) {
-            PositionAtAmbient p = evaluate(board, policy, i, ambientK, tLocal, settings, air);
+            List<ThermalOutcome> solved = solvedIn(board, i, tLocal, settings, air);
+            heat += maxHeatW(solved, board.instances().get(i), settings);
+            PositionAtAmbient p = inAir(board.board().positions().get(i), board.instances().get(i), policy, ambientK,
+                    tLocal, settings, solved, air.status(), CornersKept.EVERY);
             positions.add(p);
             status = status.worse(p.status());
-            heat += maxHeatW(p, board.instances().get(i), settings);
         }
-        return new BoardAtAmbient(ambientK, air.riseK(), heat, positions, air.evaluations(), status);
+        return new BoardAtAmbient(ambientK, air.riseK(), heat, positions, air.evaluations(), air.status(), status);
     }
 
     /**
@@ -62,11 +64,41 @@ public final class BoardSolver {
     public static PositionAtAmbient positionAt(PreparedBoard board, Policy policy, double ambientK,
                                                SolverSettings settings, int index) {
         Air air = air(board, ambientK, settings);
-        PositionAtAmbient p = evaluate(board, policy, index, ambientK, ambientK + air.riseK(), settings, air);
-        if (air.status() == PointStatus.CONVERGED) {
-            return p;
+        double tLocal = ambientK + air.riseK();
+        return inAir(board.board().positions().get(index), board.instances().get(index), policy, ambientK, tLocal,
+                settings, solvedIn(board, index, tLocal, settings, air), air.status(), CornersKept.EVERY);
+    }
+
+    /**
+     * The enclosure air at one ambient by an exact balance of the whole board (the reference the analysis's
+     * {@link AirMap} is held against): its temperature and the status of its balance.
+     */
+    static AirMap.LocalAir localAir(PreparedBoard board, double ambientK, SolverSettings settings) {
+        Air air = air(board, ambientK, settings);
+        return new AirMap.LocalAir(ambientK + air.riseK(), air.status());
+    }
+
+    /**
+     * One position held against the policy in air whose balance has status {@code air}: in balanced air as
+     * {@link #evaluate(PositionSpec, List, Policy, double, double, SolverSettings, List, CornersKept)}. Where the
+     * enclosure air runs away (no air temperature below the search's cap balances the board's heat against what the
+     * box sheds) the air heats without bound, and with it every junction in it: every corner is a
+     * {@link ThermalOutcome.Runaway} in the air where the search stopped, whatever its own solve gave there (a part
+     * solved in air a thousand kelvin above any survivable temperature gives numbers no one should read). Where the
+     * balance ran out of budget the position's own results stand, marked not converged.
+     *
+     * @param outcomes each corner's outcome in air at {@code tLocalK}; not read where the air runs away
+     */
+    static PositionAtAmbient inAir(PositionSpec spec, List<PositionInstance> instances, Policy policy,
+                                   double ambientK, double tLocalK, SolverSettings settings,
+                                   List<ThermalOutcome> outcomes, PointStatus air, CornersKept kept) {
+        if (air == PointStatus.RUNAWAY) {
+            ThermalOutcome runaway = new ThermalOutcome.Runaway(tLocalK, settings.capK());
+            return evaluate(spec, instances, policy, ambientK, tLocalK, settings,
+                    java.util.Collections.nCopies(instances.size(), runaway), kept);
         }
-        return p.withStatus(p.status().worse(air.status()));
+        PositionAtAmbient p = evaluate(spec, instances, policy, ambientK, tLocalK, settings, outcomes, kept);
+        return air == PointStatus.CONVERGED ? p : p.withStatus(p.status().worse(air));
     }
 
     /**
@@ -111,14 +143,22 @@ public final class BoardSolver {
         return new Air(rise, air.evaluations(), status, last.tLocalK == ambientK + rise ? last.outcomes : null);
     }
 
-    /** Position {@code i} in the balanced air, reusing its corners' outcomes where the balance solved them there. */
-    private static PositionAtAmbient evaluate(PreparedBoard board, Policy policy, int i, double ambientK,
-                                              double tLocalK, SolverSettings settings, Air air) {
-        PositionSpec spec = board.board().positions().get(i);
-        List<PositionInstance> instances = board.instances().get(i);
+    /** Every corner of position {@code i} in air at {@code tLocalK}: the balance's own outcomes where it solved them there. */
+    private static List<ThermalOutcome> solvedIn(PreparedBoard board, int i, double tLocalK, SolverSettings settings,
+                                                 Air air) {
         List<ThermalOutcome> solved = air.outcomesOf(i);
-        return solved != null ? evaluate(spec, instances, policy, ambientK, tLocalK, settings, solved,
-                CornersKept.EVERY) : evaluate(spec, instances, policy, ambientK, tLocalK, settings, CornersKept.EVERY);
+        return solved != null ? solved : solve(board.instances().get(i), tLocalK, settings);
+    }
+
+    /** Every corner solved in air at {@code tLocalK}. */
+    private static List<ThermalOutcome> solve(List<PositionInstance> instances, double tLocalK,
+                                              SolverSettings settings) {
+        List<ThermalOutcome> outcomes = new ArrayList<>(instances.size());
+        HeatBalance balance = new HeatBalance();
+        for (PositionInstance inst : instances) {
+            outcomes.add(inst.solveWithoutLoopGain(tLocalK, settings, balance));
+        }
+        return outcomes;
     }
 
     /**
@@ -128,12 +168,8 @@ public final class BoardSolver {
      */
     static PositionAtAmbient evaluate(PositionSpec spec, List<PositionInstance> instances, Policy policy,
                                       double ambientK, double tLocalK, SolverSettings settings, CornersKept kept) {
-        List<ThermalOutcome> outcomes = new ArrayList<>(instances.size());
-        HeatBalance balance = new HeatBalance();
-        for (PositionInstance inst : instances) {
-            outcomes.add(inst.solveWithoutLoopGain(tLocalK, settings, balance));
-        }
-        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, outcomes, kept);
+        return evaluate(spec, instances, policy, ambientK, tLocalK, settings, solve(instances, tLocalK, settings),
+                kept);
     }
 
     /**
@@ -293,7 +329,7 @@ public final class BoardSolver {
                     p.leastCurrentIndex(), p.worst(), p.margin(), p.limitingRuleId(), p.status()));
         }
         return new BoardAtAmbient(b.ambientK(), b.enclosureRiseK(), b.boardHeatW(), positions,
-                b.couplingEvaluations(), b.status());
+                b.couplingEvaluations(), b.airStatus(), b.status());
     }
 
     /** Heat of the board with the air at {@code tLocalK}: every position at its corner of greatest heat. */
@@ -317,10 +353,11 @@ public final class BoardSolver {
         return sum;
     }
 
-    private static double maxHeatW(PositionAtAmbient p, List<PositionInstance> insts, SolverSettings settings) {
+    private static double maxHeatW(List<ThermalOutcome> outcomes, List<PositionInstance> insts,
+                                   SolverSettings settings) {
         double max = 0;
         for (int k = 0; k < insts.size(); k++) {
-            max = Math.max(max, CornerHeat.of(insts.get(k), p.corners().get(k).outcome(), settings));
+            max = Math.max(max, CornerHeat.of(insts.get(k), outcomes.get(k), settings));
         }
         return max;
     }

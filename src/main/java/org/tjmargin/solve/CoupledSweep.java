@@ -39,8 +39,8 @@ import org.tjmargin.thermal.Enclosure;
  * hundred ambients; 5 % kept five and made the searches cost as much as the solves). The bounded search starts just
  * below a parabola through the last three balances ({@link #predictedRiseK}) when the bounded balance is still
  * negative there (a check, not an assumption), else at {@code x_p}. Where the bounded search finds no balance below the cap (runaway), none exists for the true heat either
- * (it is larger), and the board is evaluated at the search's last rise, as {@link BoardSolver#solveAt} does; the
- * next ambient then starts again from zero rise.
+ * (it is larger): as in {@link BoardSolver#solveAt}, the air is left at the search's last rise and every position runs
+ * away with it ({@link BoardSolver#inAir}); the next ambient then starts again from zero rise.
  *
  * <p>Cost per ambient: about four evaluations of {@code Ĥ} and one solve of every corner, instead of
  * {@link BoardSolver#solveAt}'s five to ten solves of every corner. The ambients depend on each other, so they run in
@@ -191,17 +191,21 @@ final class CoupledSweep {
                 evaluations++;
             }
             final Pass at = pass;
+            final PointStatus airAt = air;
             // Held against the policy in the pass itself, while its corners are fresh in the cache; a pass carried
-            // over from the previous ambient was held for that ambient and is held again here.
-            List<PositionAtAmbient> positions = at.ambientK() == ta ? at.positions()
+            // over from the previous ambient was held for that ambient and is held again here. In air without a
+            // balance every position is judged in it as BoardSolver.inAir says (runaway air: every corner runs away).
+            List<PositionAtAmbient> positions = air == PointStatus.CONVERGED && at.ambientK() == ta ? at.positions()
                     : IntStream.range(0, board.instances().size()).parallel()
-                            .mapToObj(i -> held(board, policy, ta, tLocal, settings, at.outcomes().get(i), i, kept))
+                            .mapToObj(i -> BoardSolver.inAir(board.board().positions().get(i),
+                                    board.instances().get(i), policy, ta, tLocal, settings, at.outcomes().get(i),
+                                    airAt, kept))
                             .toList();
             PointStatus status = air;
             for (PositionAtAmbient p : positions) {
                 status = status.worse(p.status());
             }
-            sweep.add(new BoardAtAmbient(ta, rise, pass.boardHeatW(), positions, evaluations, status));
+            sweep.add(new BoardAtAmbient(ta, rise, pass.boardHeatW(), positions, evaluations, air, status));
             progress.ambientsSwept(a + 1, ambients.length);
             airStatus.add(air);
             if (air == PointStatus.CONVERGED) {

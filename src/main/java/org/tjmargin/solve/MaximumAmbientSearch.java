@@ -111,14 +111,44 @@ public final class MaximumAmbientSearch {
         return new MaximumAmbient(MaximumAmbient.Status.FOUND, refine(margin, passT, failT, tolerance));
     }
 
+    /**
+     * The limit between {@code passT} (margin ≥ 0) and {@code failT} (margin < 0), on the passing side within
+     * {@code tolerance}. Brent's method first; where the margin jumps (a corner running away takes it from a few
+     * per cent to a stand-in of several hundred per cent below zero) its interpolation can creep from one end by
+     * ever smaller steps and spend its budget without closing the bracket, so every probe also narrows a bracket of
+     * its own, and bisection of that bracket finishes the search. Bisection halves the bracket at every probe
+     * whatever the margin's shape, so the answer is always within the tolerance.
+     */
     private static double refine(DoubleUnaryOperator margin, double passT, double failT, double tolerance) {
+        double[] bracket = {passT, failT};
+        DoubleUnaryOperator narrowing = t -> {
+            double m = margin.applyAsDouble(t);
+            if (t > bracket[0] && t < bracket[1]) {
+                bracket[m >= 0 ? 0 : 1] = t;
+            }
+            return m;
+        };
         BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-12, tolerance, 1e-12, 3);
         try {
-            double t = solver.solve(MAX_EVALUATIONS, margin::applyAsDouble, passT, failT, AllowedSolution.ABOVE_SIDE);
-            return margin.applyAsDouble(t) >= 0 ? t : passT;
+            double t = solver.solve(MAX_EVALUATIONS, narrowing::applyAsDouble, passT, failT,
+                    AllowedSolution.ABOVE_SIDE);
+            if (margin.applyAsDouble(t) >= 0) {
+                return t;
+            }
         } catch (MathIllegalStateException e) {
-            return passT;
+            // Crept: bisect what the probes have left.
         }
+        double pass = bracket[0];
+        double fail = bracket[1];
+        while (fail - pass > tolerance) {
+            double mid = 0.5 * (pass + fail);
+            if (margin.applyAsDouble(mid) >= 0) {
+                pass = mid;
+            } else {
+                fail = mid;
+            }
+        }
+        return pass;
     }
 
     private static boolean passes(PositionAtAmbient p) {

@@ -127,7 +127,8 @@ class SweepCsvTest {
             throws IOException {
         OperatingPoint op = c.point().orElse(null);
         csv.printRecord(p.positionId(), SweepCsv.num(Labels.celsius(p.ambientK())),
-                SweepCsv.num(Labels.celsius(p.tLocalK())), SweepCsv.num(b.enclosureRiseK()), c.status().name(),
+                b.airBalanced() ? SweepCsv.num(Labels.celsius(p.tLocalK())) : "",
+                b.airBalanced() ? SweepCsv.num(b.enclosureRiseK()) : "", c.status().name(),
                 SweepCsv.num(p.margin()), p.limitingRuleId(), role, c.corner().label(),
                 op == null ? "" : SweepCsv.num(Labels.celsius(op.tjK())),
                 op == null ? "" : SweepCsv.num(Labels.celsius(op.referenceK())),

@@ -25,6 +25,7 @@ class CoupledBoardTest {
     @Test
     void sweepMatchesPerAmbientBoardSolves() {
         Random rnd = new Random(SEED);
+        int runawayAir = 0;
         for (int n = 0; n < BOARDS; n++) {
             String where = "seed " + SEED + " board " + n;
             Board board = RandomCoupledBoards.draw(rnd, where);
@@ -35,6 +36,16 @@ class CoupledBoardTest {
                         SolverSettings.DEFAULT);
                 String at = where + " at " + b.ambientK() + " K";
                 assertEquals(exact.status(), b.status(), at);
+                assertEquals(exact.airStatus(), b.airStatus(), at);
+                if (b.airStatus() == PointStatus.RUNAWAY) {
+                    // Air without a balance heats without bound, and every junction in it.
+                    runawayAir++;
+                    for (PositionAtAmbient p : b.positions()) {
+                        assertEquals(PointStatus.RUNAWAY, p.status(), at);
+                        assertTrue(p.corners().stream().allMatch(c -> c.outcome() instanceof ThermalOutcome.Runaway),
+                                at + ": every corner runs away with the air");
+                    }
+                }
                 if (exact.status() == PointStatus.CONVERGED) {
                     // Both balances are held to 1e-9 K of residual (BoardSolver.AIR_BALANCE); the rise's slope in
                     // its residual is below 2 here, so the two roots agree within a few 1e-9 K.
@@ -51,6 +62,7 @@ class CoupledBoardTest {
                 }
             }
         }
+        assertTrue(runawayAir >= 3, "only " + runawayAir + " ambients with runaway air");
     }
 
     @Test
@@ -58,6 +70,8 @@ class CoupledBoardTest {
         Random rnd = new Random(SEED + 1);
         int found = 0;
         int onsets = 0;
+        int inAir = 0;
+        int drivers = 0;
         for (int n = 0; n < BOARDS; n++) {
             String where = "seed " + (SEED + 1) + " board " + n;
             Board board = RandomCoupledBoards.draw(rnd, where);
@@ -84,12 +98,21 @@ class CoupledBoardTest {
                     assertEquals(o.atOrBelowSearch(), f.get().atOrBelowSearch(), at);
                     assertEquals(o.ambientK(), f.get().ambientK(),
                             MaximumAmbientSearch.TOLERANCE_K + AirMap.TOLERANCE_K, at);
+                    assertEquals(o.cause(), f.get().cause(), at);
+                    if (f.get().cause().enclosure()) {
+                        inAir++;
+                    }
+                    if (f.get().cause() == RunawayOnset.Cause.DRIVES_ENCLOSURE) {
+                        drivers++;
+                    }
                 }
             }
         }
         // The draw must exercise what it claims to: limits found by refinement and runaway within the ranges.
         assertTrue(found >= 20, "only " + found + " maximum ambients found by refinement");
         assertTrue(onsets >= 3, "only " + onsets + " runaway onsets");
+        // ... and the enclosure air's own runaway, with positions that drive it and positions that only follow.
+        assertTrue(drivers >= 2 && inAir - drivers >= 3, drivers + " drivers of " + inAir + " onsets in runaway air");
     }
 
     /**
