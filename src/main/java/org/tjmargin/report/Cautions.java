@@ -65,6 +65,12 @@ public final class Cautions {
                     + "and char or discolour the board. Keep them clear of touchable surfaces, plastics and cables, "
                     + "and apply the touch-temperature limits of the product standard.");
         }
+        r.enclosureRunaway().ifPresent(e -> out.add("Enclosure runaway: " + RunawayText.enclosure(e, LISTED_IDS)
+                + ". In such a box the parts, the board and the box's inner surfaces keep heating until a part fails"
+                + " (a clamp usually short) or something opens; the result is a fire and burn hazard, not a slow"
+                + " derating. Keep the product's ambient well below this limit, or give the box more surface or"
+                + " venting, or the board less heat; where the limit can be reached in service, a thermal cut-out"
+                + " chosen under the product's safety standard is the last line."));
         boolean clamps = false;
         boolean highVoltage = false;
         for (PositionSpec s : r.board().positions()) {

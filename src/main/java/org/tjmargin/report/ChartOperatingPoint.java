@@ -46,9 +46,11 @@ final class ChartOperatingPoint {
         XYSeries power = ChartData.series("diode power, hottest corner");
         XYSeries vLow = ChartData.series("output, lowest corner");
         XYSeries vHigh = ChartData.series("output, highest corner");
-        for (PositionAtAmbient p : sweep) {
+        for (int k = 0; k < sweep.size(); k++) {
+            PositionAtAmbient p = sweep.get(k);
             double x = ChartData.celsius(p.ambientK());
-            air.add(x, ChartData.celsius(p.tLocalK()));
+            // Air without a balance (it runs away) has no temperature to draw.
+            air.add(x, result.sweep().get(k).airBalanced() ? (Number) ChartData.celsius(p.tLocalK()) : null);
             Optional<OperatingPoint> hot = p.hottest().flatMap(CornerPoint::point);
             tj.add(x, hot.isPresent() ? (Number) ChartData.celsius(hot.get().tjK()) : null);
             power.add(x, hot.isPresent() ? (Number) pScale.apply(hot.get().diodePowerW()) : null);

@@ -95,8 +95,9 @@ final class HtmlPositionView {
         String design = HtmlFormat.temperature(atMax.ambientK());
         return new HtmlView.Position(pr.id(), anchor, badge(pr.verdict()), summary, partFacts(), mountingFacts(),
                 circuitFacts(), pr.notes(), assumptions(),
-                "Operating points at the design's highest ambient, " + design + " (air around the part "
-                        + HtmlFormat.temperature(atMax.tLocalK()) + "), " + atMax.cornerCount() + " corner"
+                "Operating points at the design's highest ambient, " + design + " (" + (result.atMaximumAmbient()
+                        .airBalanced() ? "air around the part " + HtmlFormat.temperature(atMax.tLocalK())
+                        : "the enclosure air has no steady state there") + "), " + atMax.cornerCount() + " corner"
                         + (atMax.cornerCount() == 1 ? "" : "s") + ".",
                 cornerRows(), spec.circuit() instanceof ShuntRegulatorSpec,
                 "Each rule at its worst corner at " + design + " ambient.", marginRows(),
@@ -238,8 +239,10 @@ final class HtmlPositionView {
                     + HtmlFormat.si(b.heatTransferWPerM2K(), Dimension.HEAT_TRANSFER_COEFFICIENT) + " and "
                     + HtmlFormat.si(b.otherDissipationW(), Dimension.POWER) + " from other parts; its rise follows"
                     + " the board's heat, each position taken at its corner of greatest heat ("
-                    + HtmlFormat.kelvinDifference(last.enclosureRiseK()) + " for "
-                    + HtmlFormat.si(last.boardHeatW(), Dimension.POWER) + " at the design's highest ambient).");
+                    + (last.airBalanced() ? HtmlFormat.kelvinDifference(last.enclosureRiseK()) + " for "
+                            + HtmlFormat.si(last.boardHeatW(), Dimension.POWER) + " at the design's highest ambient)."
+                            : "at the design's highest ambient no air temperature balances the board's heat against"
+                                    + " what the box sheds: the air runs away)."));
         }
         a.add("Worst-case corners: every combination of the extremes of the varying inputs ("
                 + spec.corners().size() + " corner" + (spec.corners().size() == 1 ? "" : "s") + ").");
@@ -349,6 +352,11 @@ final class HtmlPositionView {
     }
 
     private static String runawayText(RunawayOnset o) {
+        if (o.cause() != RunawayOnset.Cause.OWN) {
+            String s = RunawayText.onset(o, HtmlFormat::temperature);
+            return Character.toUpperCase(s.charAt(0)) + s.substring(1) + "; every corner has an operating point just"
+                    + " below it.";
+        }
         return o.atOrBelowSearch()
                 ? "Thermal runaway already at the lowest ambient searched: it begins at or below "
                         + HtmlFormat.temperature(o.ambientK()) + "."

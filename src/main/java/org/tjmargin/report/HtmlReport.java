@@ -203,6 +203,9 @@ public final class HtmlReport {
         Enclosure e = r.board().enclosure();
         f.add(new HtmlView.Fact("Enclosure", e instanceof Enclosure.FixedRise fr
                 ? "given rise " + HtmlFormat.kelvinDifference(fr.riseK())
+                : !last.airBalanced() ? "sealed box; " + r.enclosureRunaway().map(x -> RunawayText.enclosure(x,
+                        SummaryTable.NOTE_IDS, HtmlFormat::temperature)).orElse("the air has no steady state at "
+                        + HtmlFormat.temperature(last.ambientK()))
                 : "sealed box, rise " + HtmlFormat.kelvinDifference(last.enclosureRiseK()) + " at "
                         + HtmlFormat.temperature(last.ambientK()) + " for a board heat of "
                         + HtmlFormat.si(last.boardHeatW(), Dimension.POWER)));

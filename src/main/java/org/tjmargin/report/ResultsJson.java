@@ -106,6 +106,12 @@ public final class ResultsJson {
         amb.put("minC", Labels.celsius(r.board().ambient().minK()));
         amb.put("maxC", Labels.celsius(r.board().ambient().maxK()));
         amb.put("points", r.board().ambient().points());
+        r.enclosureRunaway().ifPresentOrElse(e -> {
+            ObjectNode er = root.putObject("enclosureRunaway");
+            er.put("onsetC", Labels.celsius(e.ambientK()));
+            er.put("onsetAtOrBelow", e.atOrBelow());
+            e.drivers().forEach(er.putArray("drivers")::add);
+        }, () -> root.putNull("enclosureRunaway"));
         ObjectNode pol = root.putObject("policy");
         pol.put("name", r.policy().name());
         pol.put("provenance", r.policy().provenance());
@@ -200,6 +206,7 @@ public final class ResultsJson {
         if (pr.runaway().isPresent()) {
             o.put("runawayOnsetC", Labels.celsius(pr.runaway().get().ambientK()));
             o.put("runawayOnsetAtOrBelow", pr.runaway().get().atOrBelowSearch());
+            o.put("runawayCause", pr.runaway().get().cause().name());
         } else {
             o.putNull("runawayOnsetC");
         }
@@ -216,7 +223,7 @@ public final class ResultsJson {
             PositionAtAmbient top = r.atMaximumAmbient().positions().get(i);
             ObjectNode at = o.putObject("atMaxAmbient");
             at.put("ambientC", Labels.celsius(top.ambientK()));
-            at.put("tLocalC", Labels.celsius(top.tLocalK()));
+            airOrNull(at, "tLocalC", r.atMaximumAmbient(), Labels.celsius(top.tLocalK()));
             at.put("status", top.status().name());
             at.put("margin", top.margin());
             at.put("limitingRule", top.limitingRuleId());
@@ -231,8 +238,8 @@ public final class ResultsJson {
             PositionAtAmbient p = b.positions().get(i);
             ObjectNode pt = points.addObject();
             pt.put("ambientC", Labels.celsius(p.ambientK()));
-            pt.put("tLocalC", Labels.celsius(p.tLocalK()));
-            pt.put("enclosureRiseK", b.enclosureRiseK());
+            airOrNull(pt, "tLocalC", b, Labels.celsius(p.tLocalK()));
+            airOrNull(pt, "enclosureRiseK", b, b.enclosureRiseK());
             pt.put("status", p.status().name());
             pt.put("margin", p.margin());
             pt.put("limitingRule", p.limitingRuleId());
@@ -249,6 +256,15 @@ public final class ResultsJson {
         }
         o.set("surges", surges(r, i));
         return o;
+    }
+
+    /** An air temperature or rise at {@code b}'s ambient; null where the air has no balance there. */
+    private static void airOrNull(ObjectNode o, String key, BoardAtAmbient b, double value) {
+        if (b.airBalanced()) {
+            o.put(key, value);
+        } else {
+            o.putNull(key);
+        }
     }
 
     /**

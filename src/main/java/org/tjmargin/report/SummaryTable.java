@@ -11,6 +11,7 @@ import org.tjmargin.solve.AnalysisResult;
 import org.tjmargin.solve.OperatingPoint;
 import org.tjmargin.solve.PositionAtAmbient;
 import org.tjmargin.solve.PositionResult;
+import org.tjmargin.solve.RunawayOnset;
 import org.tjmargin.solve.PositionSpec;
 import org.tjmargin.solve.Verdict;
 import org.tjmargin.units.Dimension;
@@ -78,19 +79,20 @@ public final class SummaryTable {
             sb.append("note ").append(Labels.ids(n.getValue(), NOTE_IDS)).append(": ").append(n.getKey()).append('\n');
         }
         int runawayOmitted = 0;
+        r.enclosureRunaway().ifPresent(e -> sb.append("note: ").append(RunawayText.enclosure(e, NOTE_IDS))
+                .append('\n'));
         for (int i = 0; i < r.positions().size(); i++) {
             PositionResult pr = r.positions().get(i);
-            if (pr.runaway().isEmpty()) {
+            // A position that only runs away with the enclosure air is in the note above.
+            if (pr.runaway().isEmpty() || pr.runaway().get().cause() == RunawayOnset.Cause.ENCLOSURE) {
                 continue;
             }
             if (!detail.isDetailed(i)) {
                 runawayOmitted++;
                 continue;
             }
-            var o = pr.runaway().get();
-            sb.append("note ").append(pr.id()).append(": thermal runaway begins ")
-                    .append(o.atOrBelowSearch() ? "at or below " : "at ")
-                    .append(String.format(Locale.ROOT, "%.1f °C ambient", Labels.celsius(o.ambientK()))).append('\n');
+            sb.append("note ").append(pr.id()).append(": ").append(RunawayText.onset(pr.runaway().get()))
+                    .append('\n');
         }
         if (runawayOmitted > 0) {
             sb.append("note: thermal runaway begins within or near the range for ").append(runawayOmitted)
@@ -119,7 +121,9 @@ public final class SummaryTable {
                     : "unresolved";
             String corners = Double.isNaN(p.corners().tjMaxK()) ? "-" : String.format(Locale.ROOT,
                     "%.1f … %.1f °C", Labels.celsius(p.corners().tjMinK()), Labels.celsius(p.corners().tjMaxK()));
-            String top = p.tornado().bars().isEmpty() ? "-" : p.tornado().bars().get(0).axis().label();
+            // No input moves the margin (e.g. every point runs away): none is the strongest.
+            String top = p.tornado().bars().isEmpty() || !(p.tornado().bars().get(0).swing() > 0) ? "-"
+                    : p.tornado().bars().get(0).axis().label();
             rows.add(new String[] {p.positionId(), String.format(Locale.ROOT, "%s [%s, %s]",
                 StatisticsFormat.probability(v.estimate()), StatisticsFormat.probability(v.lower()),
                 StatisticsFormat.probability(v.upper())),

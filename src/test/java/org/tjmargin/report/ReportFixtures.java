@@ -135,6 +135,17 @@ final class ReportFixtures {
                 new AmbientRange(c(0), c(85), 6)), new Policy("hopeless", "invented", rules), SolverSettings.DEFAULT);
     }
 
+    /**
+     * The mixed board's three positions in a small sealed box: the leaky clamp's leakage, doubling every 10 K, runs
+     * its junction away in the hot end, its heat at the junction cap is more than the box can shed, and the air runs
+     * away with it, taking the regulator and the reference along.
+     */
+    static AnalysisResult boxRunsAway(String name) {
+        return Analysis.run(new Board(name, List.of(regulator("D1"), reference("REF2"), clamp("TVS3")),
+                new Enclosure.SealedBox(0.05, 6.0, 0.5), new AmbientRange(c(0), c(85), 10)),
+                Policy.builtInMinimum(), SolverSettings.DEFAULT);
+    }
+
     /** The built-in minimum plus a few policy rules, so that charts have several lines. */
     static Policy policy() {
         List<Rule> rules = new ArrayList<>(Policy.builtInMinimum().rules());

@@ -91,9 +91,10 @@ public final class MonteCarlo {
             }
         }
         if (tjMin > tjMax) {
-            // No corner converged: the whole searched span, and every margin a rule can give.
-            tjMin = ev.tLocalK();
-            tjMax = ev.settings().capK();
+            // No corner converged: the whole searched span (in runaway air, whose search stopped above the junction
+            // cap, from the cap to that air), and every margin a rule can give.
+            tjMin = Math.min(ev.tLocalK(), ev.settings().capK());
+            tjMax = Math.max(ev.tLocalK(), ev.settings().capK());
             mMin = -1.0;
             mMax = 1.0;
         }
@@ -130,8 +131,8 @@ public final class MonteCarlo {
             }
         }
         if (min > max) {
-            min = tLocalK;
-            max = solver.capK();
+            min = Math.min(tLocalK, solver.capK());
+            max = Math.max(tLocalK, solver.capK());
         }
         Bins edges = Bins.around(min, max, 0.5, settings.histogramBins());
         List<Tally> blocks = IntStream.range(0, settings.blocks()).parallel().mapToObj(b -> {

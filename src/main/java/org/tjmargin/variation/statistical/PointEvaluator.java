@@ -26,13 +26,22 @@ import org.tjmargin.variation.AxisValues;
  * @param withSurges true to run the position's surges (if it has any) at every converged point, so that the surge
  *                 rules join the steady-state ones; each surge is a coupled transient (≈ 1 ms), so a run with
  *                 surges costs far more per sample than one without
+ * @param airRunsAway true where the air has no balance ({@code tLocalK} is where its search stopped): the air heats
+ *                 without bound and every junction with it, so every point is a runaway, as in the corner analysis
+ *                 ({@code BoardSolver.inAir})
  */
 public record PointEvaluator(PositionSpec spec, Policy policy, double tLocalK, SolverSettings settings,
-                             boolean withSurges) {
+                             boolean withSurges, boolean airRunsAway) {
 
     /** An evaluator of the steady-state rules only (surges not run). */
     public PointEvaluator(PositionSpec spec, Policy policy, double tLocalK, SolverSettings settings) {
         this(spec, policy, tLocalK, settings, false);
+    }
+
+    /** An evaluator in balanced air. */
+    public PointEvaluator(PositionSpec spec, Policy policy, double tLocalK, SolverSettings settings,
+                          boolean withSurges) {
+        this(spec, policy, tLocalK, settings, withSurges, false);
     }
 
     /** True when this evaluator runs surges: asked for and the position has some. */
@@ -55,9 +64,9 @@ public record PointEvaluator(PositionSpec spec, Policy policy, double tLocalK, S
     /** The point at {@code values}. */
     public Evaluation evaluate(AxisValues values) {
         PositionInstance inst = spec.atValues(values);
-        Optional<OperatingPoint> fast = LinearFastPath.solve(inst, tLocalK, settings);
-        ThermalOutcome out = fast.<ThermalOutcome>map(ThermalOutcome.Converged::new)
-                .orElseGet(() -> inst.solve(tLocalK, settings));
+        Optional<OperatingPoint> fast = airRunsAway ? Optional.empty() : LinearFastPath.solve(inst, tLocalK, settings);
+        ThermalOutcome out = airRunsAway ? new ThermalOutcome.Runaway(tLocalK, settings.capK())
+                : fast.<ThermalOutcome>map(ThermalOutcome.Converged::new).orElseGet(() -> inst.solve(tLocalK, settings));
         boolean surgeStopped = false;
         RuleContext ctx;
         if (runsSurges() && out instanceof ThermalOutcome.Converged c) {

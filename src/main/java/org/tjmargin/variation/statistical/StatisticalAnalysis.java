@@ -6,6 +6,7 @@ import java.util.stream.IntStream;
 import org.tjmargin.derating.Policy;
 import org.tjmargin.solve.AnalysisResult;
 import org.tjmargin.solve.BoardAtAmbient;
+import org.tjmargin.solve.PointStatus;
 import org.tjmargin.solve.PositionAtAmbient;
 import org.tjmargin.solve.PositionSpec;
 import org.tjmargin.solve.SolverSettings;
@@ -102,7 +103,8 @@ public final class StatisticalAnalysis {
         BoardAtAmbient hottest = result.atMaximumAmbient();
         PositionAtAmbient at = hottest.positions().get(i);
         boolean surges = spec.surges().isPresent();
-        PointEvaluator ev = new PointEvaluator(spec, policy, at.tLocalK(), solver, surges);
+        PointEvaluator ev = new PointEvaluator(spec, policy, at.tLocalK(), solver, surges,
+                hottest.airStatus() == PointStatus.RUNAWAY);
         MonteCarloSettings top = surges
                 ? new MonteCarloSettings(plan.surgeSamples(), plan.settings().seed(), plan.settings().blockSize(),
                         plan.settings().histogramBins())

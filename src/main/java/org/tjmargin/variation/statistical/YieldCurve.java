@@ -3,6 +3,7 @@ package org.tjmargin.variation.statistical;
 import java.util.List;
 import org.tjmargin.derating.Policy;
 import org.tjmargin.solve.BoardAtAmbient;
+import org.tjmargin.solve.PointStatus;
 import org.tjmargin.solve.PositionSpec;
 import org.tjmargin.solve.SolverSettings;
 import org.tjmargin.variation.VariationModel;
@@ -40,7 +41,8 @@ public final class YieldCurve {
             throw new IllegalArgumentException("position " + positionIndex + " of the sweep is " + p.positionId()
                     + ", not " + spec.id());
         }
-        MonteCarloResult r = MonteCarlo.run(new PointEvaluator(spec, policy, p.tLocalK(), solver), model, settings);
+        MonteCarloResult r = MonteCarlo.run(new PointEvaluator(spec, policy, p.tLocalK(), solver, false,
+                b.airStatus() == PointStatus.RUNAWAY), model, settings);
         return YieldPoint.of(b.ambientK(), p.tLocalK(), r);
     }
 }
