@@ -50,12 +50,16 @@ final class HtmlFormat {
         return si(k, Dimension.TEMPERATURE_DIFFERENCE);
     }
 
-    /** A relative margin in per cent with one decimal, e.g. {@code 12.1 %} or {@code -680.0 %}. */
+    /**
+     * A relative margin in per cent with one decimal, e.g. {@code 12.1 %} or {@code -680.0 %}; below
+     * {@link Labels#MARGIN_SHOWN_FLOOR}, {@code < -10000 %}.
+     */
     static String margin(double fraction) {
         if (!Double.isFinite(fraction)) {
             return NONE;
         }
-        return new BigDecimal(100.0 * fraction).setScale(1, RoundingMode.HALF_EVEN).toPlainString() + " %";
+        return Labels.marginPercent(fraction, f -> new BigDecimal(100.0 * f).setScale(1, RoundingMode.HALF_EVEN)
+                .toPlainString() + " %");
     }
 
     /** A plain number with {@value #PLAIN_DIGITS} significant digits, e.g. {@code 0.423}, {@code 25.0}. */

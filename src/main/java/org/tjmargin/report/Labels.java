@@ -12,6 +12,19 @@ public final class Labels {
     private Labels() {
     }
 
+    /**
+     * Below this margin (1, i.e. −10 000 %) the table and the report write {@code < -10000 %} instead of the figure.
+     * Such margins come from stand-ins (a rating that has reached zero while power flows counts as a ratio of 1e9,
+     * a junction with no operating point as sitting at the solver's cap) or from ratios so far past their limit that
+     * the figure says nothing more; {@code results.json} and the CSV files keep the number.
+     */
+    public static final double MARGIN_SHOWN_FLOOR = -100.0;
+
+    /** A margin in per cent with one decimal in {@code format}'s rounding, or {@code < -10000 %} below the floor. */
+    static String marginPercent(double fraction, java.util.function.DoubleFunction<String> format) {
+        return fraction < MARGIN_SHOWN_FLOOR ? "< -10000 %" : format.apply(fraction);
+    }
+
     /** The circuit's kind as a short key: {@code shunt-regulator}, {@code current-fed}, {@code standoff-clamp}. */
     public static String circuitKind(CircuitSpec c) {
         if (c instanceof ShuntRegulatorSpec) {

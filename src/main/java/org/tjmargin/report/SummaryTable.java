@@ -211,7 +211,7 @@ public final class SummaryTable {
             hot == null ? "-" : Quantities.format(hot.circuit().voltageV(), Dimension.VOLTAGE),
             Double.isInfinite(minIz) ? "-" : Quantities.format(minIz, Dimension.CURRENT),
             Labels.maxAmbient(pr.maxAmbient()), pr.limitingRuleId(),
-            String.format(Locale.ROOT, "%.1f %%", 100 * pr.worstMargin())};
+            Labels.marginPercent(pr.worstMargin(), f -> String.format(Locale.ROOT, "%.1f %%", 100 * f))};
     }
 
     private static String pad(String s, int w) {

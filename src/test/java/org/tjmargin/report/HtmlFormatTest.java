@@ -24,6 +24,10 @@ class HtmlFormatTest {
         assertEquals("12.1 %", HtmlFormat.margin(0.12104));
         assertEquals("-680.0 %", HtmlFormat.margin(-6.8));
         assertEquals("0.0 %", HtmlFormat.margin(0.0));
+        // Past -10 000 % only stand-ins and meaningless figures remain (a rating at zero counts as a ratio of 1e9).
+        assertEquals("-10000.0 %", HtmlFormat.margin(-100.0));
+        assertEquals("< -10000 %", HtmlFormat.margin(-100.001));
+        assertEquals("< -10000 %", HtmlFormat.margin(1 - 1e9 / 0.8));
     }
 
     @Test
