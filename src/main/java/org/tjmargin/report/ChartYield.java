@@ -17,7 +17,8 @@ import org.tjmargin.variation.statistical.YieldPoint;
 /**
  * The yield of one position against ambient ({@link PositionStatistics#yield()}): the fraction of Monte Carlo
  * samples that pass the steady-state rules at each ambient of the curve, inside its 95 % Wilson score band, with the
- * design's highest ambient marked. The curve never runs surges ({@link StatisticsText#YIELD_RULES}), and says so.
+ * design's highest ambient marked; for a position with surges, a second curve and band with every rule, each surge
+ * run on every sample ({@link PositionStatistics#yieldWithSurges()}, fewer samples, so a wider band).
  */
 final class ChartYield {
 
@@ -28,17 +29,19 @@ final class ChartYield {
     }
 
     static JFreeChart build(AnalysisResult result, int index, PositionStatistics s) {
-        YIntervalSeries yield = new YIntervalSeries("yield, steady-state rules, with its 95 % Wilson band", false,
-                true);
-        double lo = 100.0;
-        long samples = 0;
-        for (YieldPoint p : s.yield()) {
-            yield.add(ChartData.celsius(p.ambientK()), 100.0 * p.yield(), 100.0 * p.wilsonLo(), 100.0 * p.wilsonHi());
-            lo = Math.min(lo, 100.0 * p.wilsonLo());
-            samples = p.samples();
-        }
+        boolean surges = !s.yieldWithSurges().isEmpty();
+        YIntervalSeries yield = new YIntervalSeries("yield, " + StatisticsText.YIELD_RULES
+                + (surges ? " (" + s.yield().get(0).samples() + " samples)" : "") + ", with its 95 % Wilson band",
+                false, true);
+        double lo = add(yield, s.yield());
         YIntervalSeriesCollection data = new YIntervalSeriesCollection();
         data.addSeries(yield);
+        if (surges) {
+            YIntervalSeries with = new YIntervalSeries("yield, " + StatisticsText.YIELD_WITH_SURGES + " ("
+                    + s.yieldWithSurges().get(0).samples() + " samples), with its band", false, true);
+            lo = Math.min(lo, add(with, s.yieldWithSurges()));
+            data.addSeries(with);
+        }
 
         double firstK = result.sweep().get(0).ambientK();
         double designK = result.atMaximumAmbient().ambientK();
@@ -57,6 +60,10 @@ final class ChartYield {
         r.setSeriesStroke(0, Palette.seriesStroke(0));
         r.setSeriesFillPaint(0, Palette.seriesPaint(0));
         r.setSeriesShape(0, new Ellipse2D.Double(-3, -3, 6, 6));
+        r.setSeriesPaint(1, Palette.seriesPaint(1));
+        r.setSeriesStroke(1, Palette.seriesStroke(1));
+        r.setSeriesFillPaint(1, Palette.seriesPaint(1));
+        r.setSeriesShape(1, new java.awt.geom.Rectangle2D.Double(-3, -3, 6, 6));
         // The band is a wash of the line's ink.
         r.setAlpha(0.22f);
         XYPlot plot = new XYPlot(data, x, y, r);
@@ -66,16 +73,25 @@ final class ChartYield {
                 Layer.BACKGROUND);
 
         List<String> subtitles = new ArrayList<>();
-        subtitles.add("Seeded Monte Carlo of " + samples + " samples (seed " + s.monteCarlo().settings().seed()
-                + ") at each of " + s.yield().size() + " ambients, the same draws at every ambient.");
-        subtitles.add("Yield against the " + (s.surgesIncluded() || hasSurges(result, index)
-                ? StatisticsText.YIELD_RULES : "steady-state rules") + ": the fraction of samples passing all of them;"
+        subtitles.add("Seeded Monte Carlo of " + s.yield().get(0).samples() + " samples (seed "
+                + s.monteCarlo().settings().seed() + ") at each of " + s.yield().size() + " ambients, the same draws"
+                + " at every ambient" + (surges ? "; with surges, the first " + s.yieldWithSurges().get(0).samples()
+                + " of them." : "."));
+        subtitles.add("Yield against the " + StatisticsText.YIELD_RULES + (surges ? " and against "
+                + StatisticsText.YIELD_WITH_SURGES : "") + ": the fraction of samples passing all of them;"
                 + " band: 95 % Wilson score interval.");
         subtitles.add(ChartStatisticsData.air());
         return ChartStyle.chart(s.positionId() + " — yield against ambient", subtitles, plot);
     }
 
-    private static boolean hasSurges(AnalysisResult result, int index) {
-        return result.board().positions().get(index).surges().isPresent();
+    /** Adds the points to the series; returns the lowest lower bound (%). */
+    private static double add(YIntervalSeries series, List<YieldPoint> points) {
+        double lo = 100.0;
+        for (YieldPoint p : points) {
+            series.add(ChartData.celsius(p.ambientK()), 100.0 * p.yield(), 100.0 * p.wilsonLo(),
+                    100.0 * p.wilsonHi());
+            lo = Math.min(lo, 100.0 * p.wilsonLo());
+        }
+        return lo;
     }
 }

@@ -109,8 +109,11 @@ final class HtmlStatisticsView {
         String surges = null;
         if (s.surgesIncluded()) {
             surges = "At " + at + " the Monte Carlo (" + mc.settings().samples() + " samples), the root-sum-square "
-                    + "spread and the ranking run every surge of this position on every point; the yield curve "
-                    + "holds the " + StatisticsText.YIELD_RULES + ".";
+                    + "spread and the ranking run every surge of this position on every point. The yield chart has"
+                    + " two curves: the " + StatisticsText.YIELD_RULES + " (" + s.yield().get(0).samples()
+                    + " samples at each ambient) and " + StatisticsText.YIELD_WITH_SURGES + " ("
+                    + (s.yieldWithSurges().isEmpty() ? mc.settings().samples() : s.yieldWithSurges().get(0)
+                    .samples()) + ", the same parts as the first of the others).";
         }
         return new HtmlView.Statistics(anchor(positionAnchor), caption, methods(s), run(s), violations(result, atMax,
                 mc), "Each rule of the policy that applies to this position, with the fraction of the "

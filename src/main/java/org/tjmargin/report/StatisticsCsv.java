@@ -3,6 +3,7 @@ package org.tjmargin.report;
 import java.io.IOException;
 import java.io.StringWriter;
 import java.io.UncheckedIOException;
+import java.util.List;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.tjmargin.solve.AnalysisResult;
@@ -79,15 +80,21 @@ public final class StatisticsCsv {
     public static String yield(StatisticsResult s) {
         return print(YIELD_HEADER, csv -> {
             for (PositionStatistics p : s.positions()) {
-                for (YieldPoint y : p.yield()) {
-                    var worst = y.mostViolated();
-                    csv.printRecord(p.positionId(), Labels.celsius(y.ambientK()), Labels.celsius(y.tLocalK()),
-                            y.yield(), y.wilsonLo(), y.wilsonHi(), y.samples(), "steady-state",
-                            worst.map(RuleViolation::ruleId).orElse(""),
-                            worst.map(w -> (Object) w.probability().estimate()).orElse(""));
-                }
+                yieldRows(csv, p.positionId(), p.yield(), "steady-state");
+                yieldRows(csv, p.positionId(), p.yieldWithSurges(), "with-surges");
             }
         });
+    }
+
+    /** The rows of one yield curve; {@code rules} names what it holds. */
+    private static void yieldRows(CSVPrinter csv, String id, List<YieldPoint> points, String rules)
+            throws IOException {
+        for (YieldPoint y : points) {
+            var worst = y.mostViolated();
+            csv.printRecord(id, Labels.celsius(y.ambientK()), Labels.celsius(y.tLocalK()), y.yield(), y.wilsonLo(),
+                    y.wilsonHi(), y.samples(), rules, worst.map(RuleViolation::ruleId).orElse(""),
+                    worst.map(w -> (Object) w.probability().estimate()).orElse(""));
+        }
     }
 
     /** {@code sensitivity.csv}. */

@@ -75,10 +75,20 @@ final class StatisticsJson {
             bar.set("atHigh", evaluation(mapper, b.atHigh()));
             bar.put("marginSwing", b.swing());
         }
-        ObjectNode y = o.putObject("yield");
-        y.put("rules", StatisticsText.YIELD_RULES);
+        o.set("yield", yieldCurve(mapper, StatisticsText.YIELD_RULES, s.yield()));
+        if (s.yieldWithSurges().isEmpty()) {
+            o.putNull("yieldWithSurges");
+        } else {
+            o.set("yieldWithSurges", yieldCurve(mapper, StatisticsText.YIELD_WITH_SURGES, s.yieldWithSurges()));
+        }
+        return o;
+    }
+
+    private static ObjectNode yieldCurve(JsonNodeFactory mapper, String rules, List<YieldPoint> points) {
+        ObjectNode y = mapper.objectNode();
+        y.put("rules", rules);
         ArrayNode pts = y.putArray("points");
-        for (YieldPoint p : s.yield()) {
+        for (YieldPoint p : points) {
             ObjectNode pt = pts.addObject().put("ambientC", Labels.celsius(p.ambientK()))
                     .put("tLocalC", Labels.celsius(p.tLocalK())).put("yield", p.yield()).put("lower", p.wilsonLo())
                     .put("upper", p.wilsonHi()).put("samples", p.samples());
@@ -87,7 +97,7 @@ final class StatisticsJson {
                 pr.addObject().put("id", v.ruleId()).setAll(interval(mapper, v.probability()));
             }
         }
-        return o;
+        return y;
     }
 
     private static ObjectNode rss(JsonNodeFactory mapper, PositionSpec spec, RssOutcome rss) {

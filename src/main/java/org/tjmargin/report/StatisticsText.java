@@ -21,7 +21,10 @@ final class StatisticsText {
             + "the limiting margin";
 
     /** What the yield curve holds. */
-    static final String YIELD_RULES = "steady-state rules (surges are run only at the design's highest ambient)";
+    static final String YIELD_RULES = "steady-state rules";
+
+    /** What the second yield curve of a position with surges holds. */
+    static final String YIELD_WITH_SURGES = "every rule, each surge run on every sample";
 
     /** The air in which every statistical run is taken. */
     static final String AIR = "the position's air at each ambient is the corner analysis's worst-case board balance"

@@ -163,7 +163,7 @@ class ChartStatisticsTest {
     }
 
     @Test
-    void yieldCurveDrawsTheBandTheDesignMaximumAndSaysSteadyState() {
+    void yieldCurveDrawsTheBandTheDesignMaximumAndTheCurveWithSurges() {
         for (int i = 0; i < DEMO.result().positions().size(); i++) {
             PositionStatistics s = stats(i);
             JFreeChart chart = ChartSet.build(DEMO.result(), DEMO.optional(), i, ChartKind.YIELD);
@@ -180,9 +180,20 @@ class ChartStatisticsTest {
             assertEquals(List.of(Labels.celsius(DEMO.result().atMaximumAmbient().ambientK())),
                     values(plot.getDomainMarkers(Layer.BACKGROUND)));
             List<String> sub = subtitles(chart);
-            assertTrue(sub.stream().anyMatch(t -> t.contains("steady-state rules")), sub::toString);
+            assertTrue(sub.stream().anyMatch(t -> t.contains(StatisticsText.YIELD_RULES)), sub::toString);
             boolean surges = DEMO.result().board().positions().get(i).surges().isPresent();
-            assertEquals(surges, sub.stream().anyMatch(t -> t.contains(StatisticsText.YIELD_RULES)), s.positionId());
+            assertEquals(surges, sub.stream().anyMatch(t -> t.contains(StatisticsText.YIELD_WITH_SURGES)),
+                    s.positionId());
+            assertEquals(surges ? 2 : 1, data.getSeriesCount(), s.positionId());
+            List<YieldPoint> with = s.yieldWithSurges();
+            assertEquals(surges ? yield.size() : 0, with.size(), s.positionId());
+            for (int k = 0; k < with.size(); k++) {
+                // The second curve: every rule with the surges, at the same ambients.
+                assertEquals(data.getXValue(0, k), data.getXValue(1, k), 0.0);
+                assertEquals(100.0 * with.get(k).yield(), data.getYValue(1, k), 0.0);
+                assertEquals(100.0 * with.get(k).wilsonLo(), data.getStartYValue(1, k), 0.0);
+                assertEquals(StatisticsFixtures.SURGE_SAMPLES, with.get(k).samples());
+            }
         }
     }
 

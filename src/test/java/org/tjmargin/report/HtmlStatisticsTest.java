@@ -117,11 +117,13 @@ class HtmlStatisticsTest {
     }
 
     @Test
-    void aPositionWithSurgesSaysTheYieldCurveIsSteadyStateOnly() {
-        assertTrue(section(HTML, "D4").contains(escaped(StatisticsText.YIELD_RULES)), "D4 runs surges");
-        assertFalse(section(HTML, "D1").contains(escaped(StatisticsText.YIELD_RULES)), "D1 has none");
-        assertTrue(section(HTML, "D4").contains(StatisticsFixtures.SURGE_SAMPLES + " samples, seed"),
-                "the surge run's own budget");
+    void aPositionWithSurgesHasASecondYieldCurveWithThem() {
+        String d4 = section(HTML, "D4");
+        assertTrue(d4.contains("The yield chart has two curves: the " + StatisticsText.YIELD_RULES + " ("
+                + StatisticsFixtures.SAMPLES + " samples at each ambient) and " + StatisticsText.YIELD_WITH_SURGES
+                + " (" + StatisticsFixtures.SURGE_SAMPLES + ", "), "D4 runs surges");
+        assertFalse(section(HTML, "D1").contains(StatisticsText.YIELD_WITH_SURGES), "D1 has none");
+        assertTrue(d4.contains(StatisticsFixtures.SURGE_SAMPLES + " samples, seed"), "the surge run's own budget");
     }
 
     @Test

@@ -16,12 +16,17 @@ import java.util.List;
  * @param tornado        each input swung over its range, the others nominal, ranked by its effect on the margin
  * @param yield          the probability of passing the steady-state rules, and of violating each, at each ambient
  *                       of the yield curve
- *                       (surges are not run there: see {@link StatisticalAnalysis})
+ * @param yieldWithSurges for a position with surges, the same ambients with every rule, each surge run on every
+ *                       sample (with the surge sample count, see {@link StatisticalAnalysis}); empty otherwise
  */
 public record PositionStatistics(String positionId, double ambientK, double tLocalK, CornerExtremes corners,
                                  RssOutcome rss, MonteCarloResult monteCarlo, boolean surgesIncluded,
-                                 TornadoResult tornado, List<YieldPoint> yield) {
+                                 TornadoResult tornado, List<YieldPoint> yield, List<YieldPoint> yieldWithSurges) {
     public PositionStatistics {
         yield = List.copyOf(yield);
+        yieldWithSurges = List.copyOf(yieldWithSurges);
+        if (!yieldWithSurges.isEmpty() && yieldWithSurges.size() != yield.size()) {
+            throw new IllegalArgumentException("the curve with surges must take the ambients of the steady-state one");
+        }
     }
 }

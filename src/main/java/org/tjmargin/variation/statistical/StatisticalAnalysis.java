@@ -24,16 +24,19 @@ import org.tjmargin.variation.VariationModel;
  * more than its worst corners).
  *
  * <p>Surges. Where a position has surges, its run at the highest ambient (and the spread and ranking there) runs
- * every surge on every sample, with {@link StatisticsPlan#surgeSamples()} samples since each is a coupled transient;
- * the yield curve holds the steady-state rules only (at 1 ms or more per surge and sample, the curve with surges
- * would cost minutes). Both are labelled so in every output.
+ * every surge on every sample, with {@link StatisticsPlan#surgeSamples()} samples since each is a coupled transient
+ * (about 0.5 ms per surge and sample here). Its yield curve is drawn twice over the same ambients: the steady-state
+ * rules with the full sample count, which resolves small probabilities, and every rule with each surge run on every
+ * sample, with the surge sample count (the same parts, the first of the full run's draws), which is what the
+ * position must pass. Both are labelled so in every output.
  *
  * <p>Determinism. Every run uses the plan's seed (common random numbers across ambients: the same parts at every
  * temperature, so the yield curve is smooth) and {@link MonteCarlo}'s split streams, so results are identical
  * whatever the number of threads. Positions and ambients run in parallel on the common fork-join pool.
  *
  * <p>Cost: {@code positions × (1 + yield points − 1) × samples} steady-state samples (the curve's last point reuses
- * the highest-ambient run where no surges are run), plus {@code surge positions × surge samples} transient samples.
+ * the highest-ambient run where no surges are run), plus {@code surge positions × yield points × surge samples}
+ * samples with transients (the curve with surges reuses the highest-ambient run at its last point).
  */
 public final class StatisticalAnalysis {
 
@@ -70,11 +73,11 @@ public final class StatisticalAnalysis {
         return total;
     }
 
-    /** Samples one position draws: the highest-ambient run and the yield curve's other points. */
+    /** Samples one position draws: the highest-ambient run and the yield curves' other points. */
     static long samplesOf(PositionSpec spec, StatisticsPlan plan, int yieldPoints) {
         long n = plan.settings().samples();
         if (spec.surges().isPresent()) {
-            return plan.surgeSamples() + (long) yieldPoints * n;
+            return (long) yieldPoints * (plan.surgeSamples() + n);
         }
         return (long) yieldPoints * n;
     }
@@ -118,12 +121,21 @@ public final class StatisticalAnalysis {
             if (k == last && !surges) {
                 return YieldPoint.of(hottest.ambientK(), at.tLocalK(), mc);
             }
-            YieldPoint p = YieldCurve.at(result.sweep().get(k), i, spec, policy, model, plan.settings(), solver);
+            YieldPoint p = YieldCurve.at(result.sweep().get(k), i, spec, policy, model, plan.settings(), solver,
+                    false);
             work.done(plan.settings().samples());
             return p;
         }).toList();
+        List<YieldPoint> withSurges = !surges ? List.of() : IntStream.of(ambients).parallel().mapToObj(k -> {
+            if (k == last) {
+                return YieldPoint.of(hottest.ambientK(), at.tLocalK(), mc);
+            }
+            YieldPoint p = YieldCurve.at(result.sweep().get(k), i, spec, policy, model, top, solver, true);
+            work.done(top.samples());
+            return p;
+        }).toList();
         return new PositionStatistics(spec.id(), hottest.ambientK(), at.tLocalK(), extremes(at), rss, mc, surges,
-                tornado, yield);
+                tornado, yield, withSurges);
     }
 
     private static CornerExtremes extremes(PositionAtAmbient at) {

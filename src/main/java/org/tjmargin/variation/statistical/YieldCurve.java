@@ -30,18 +30,21 @@ public final class YieldCurve {
      */
     public static List<YieldPoint> of(List<BoardAtAmbient> sweep, int positionIndex, PositionSpec spec, Policy policy,
                                       VariationModel model, MonteCarloSettings settings, SolverSettings solver) {
-        return sweep.stream().map(b -> at(b, positionIndex, spec, policy, model, settings, solver)).toList();
+        return sweep.stream().map(b -> at(b, positionIndex, spec, policy, model, settings, solver, false)).toList();
     }
 
-    /** The yield at one ambient of the sweep: the steady-state rules, the position's air from the board balance. */
+    /**
+     * The yield at one ambient of the sweep, the position's air from the board balance: the steady-state rules, or
+     * with {@code withSurges} every rule with each of the position's surges run on every sample.
+     */
     static YieldPoint at(BoardAtAmbient b, int positionIndex, PositionSpec spec, Policy policy, VariationModel model,
-                         MonteCarloSettings settings, SolverSettings solver) {
+                         MonteCarloSettings settings, SolverSettings solver, boolean withSurges) {
         var p = b.positions().get(positionIndex);
         if (!p.positionId().equals(spec.id())) {
             throw new IllegalArgumentException("position " + positionIndex + " of the sweep is " + p.positionId()
                     + ", not " + spec.id());
         }
-        MonteCarloResult r = MonteCarlo.run(new PointEvaluator(spec, policy, p.tLocalK(), solver, false,
+        MonteCarloResult r = MonteCarlo.run(new PointEvaluator(spec, policy, p.tLocalK(), solver, withSurges,
                 b.airStatus() == PointStatus.RUNAWAY), model, settings);
         return YieldPoint.of(b.ambientK(), p.tLocalK(), r);
     }

@@ -155,6 +155,58 @@ class StatisticalAnalysisTest {
     }
 
     /**
+     * The surge clamp D4's second yield curve: the same ambients, every rule with each surge run on every sample, the
+     * highest-ambient run (with surges) as its last point. Adding rules can only add failures, so on the same parts
+     * (common random numbers: the curve's samples are the first of the steady-state run's draws) it fails at least
+     * every sample the steady-state rules fail. Positions without surges have none.
+     */
+    @Test
+    void theSurgeClampsSecondYieldCurveRunsItsSurgesOnTheSameParts() {
+        PositionStatistics d4 = stats.of("D4").orElseThrow();
+        List<YieldPoint> with = d4.yieldWithSurges();
+        List<YieldPoint> steady = d4.yield();
+        assertEquals(steady.size(), with.size());
+        int index = result.board().positions().indexOf(result.board().positions().stream()
+                .filter(p -> p.id().equals("D4")).findFirst().orElseThrow());
+        int[] ambients = StatisticalAnalysis.yieldIndices(result.sweep().size(), plan.yieldPoints());
+        MonteCarloSettings few = new MonteCarloSettings(plan.surgeSamples(), plan.settings().seed(),
+                plan.settings().blockSize(), plan.settings().histogramBins());
+        for (int k = 0; k < with.size(); k++) {
+            assertEquals(steady.get(k).ambientK(), with.get(k).ambientK(), 0.0);
+            assertEquals(plan.surgeSamples(), with.get(k).samples());
+            YieldPoint sameParts = YieldCurve.at(result.sweep().get(ambients[k]), index,
+                    result.board().positions().get(index), result.policy(), plan.modelFor("D4"), few,
+                    SolverSettings.DEFAULT, false);
+            assertTrue(with.get(k).yield() <= sameParts.yield(), "with surges at " + with.get(k).ambientK()
+                    + " K: " + with.get(k).yield() + " > " + sameParts.yield());
+        }
+        assertEquals(d4.monteCarlo().yield().estimate(), with.get(with.size() - 1).yield(), 0.0);
+        assertTrue(stats.of("D1").orElseThrow().yieldWithSurges().isEmpty());
+    }
+
+    /**
+     * The same board swept hotter, to 100 °C, where the clamp D4's surges exceed their limits while its steady state
+     * still holds: the curve with surges falls where the steady-state one does not.
+     */
+    @Test
+    void theCurveWithSurgesFallsWhereTheSurgesFail() {
+        var b = loaded.board();
+        var hotter = new org.tjmargin.solve.Board(b.name(), b.positions(), b.enclosure(),
+                new org.tjmargin.solve.AmbientRange(org.tjmargin.device.Celsius.toKelvin(40),
+                        org.tjmargin.device.Celsius.toKelvin(100), 4));
+        AnalysisResult r = Analysis.run(hotter, result.policy(), SolverSettings.DEFAULT);
+        StatisticsPlan small = new StatisticsPlan(MonteCarloSettings.of(400, plan.settings().seed()), 4, 40,
+                plan.models(), Optional.of(java.util.Set.of("D4")));
+        PositionStatistics d4 = StatisticalAnalysis.run(r, small, SolverSettings.DEFAULT, StatisticsProgress.NONE)
+                .of("D4").orElseThrow();
+        YieldPoint steady = d4.yield().get(3);
+        YieldPoint with = d4.yieldWithSurges().get(3);
+        assertEquals(1.0, steady.yield(), 0.0, "D4's steady state holds at 100 °C");
+        assertEquals(0.0, with.yield(), 0.0, "its surges fail there on every part");
+        assertEquals(1.0, d4.yieldWithSurges().get(0).yield(), 0.0, "and pass at 40 °C");
+    }
+
+    /**
      * Root-sum-square against Monte Carlo on the near-linear current-fed reference D2 (JCGM 100:2008, §5.1.2: the
      * first-order law is exact for a linear model; D2's Tj is linear in its inputs to about 1 %): the spreads agree
      * within the Monte Carlo's own sampling error of σ at 3000 samples (σ/√(2n) ≈ 1.3 %) plus the nonlinearity,
