@@ -1,6 +1,7 @@
 package org.tjmargin.solve;
 
 import java.util.List;
+import java.util.Optional;
 import org.tjmargin.derating.Policy;
 
 /**
@@ -20,7 +21,7 @@ public record AnalysisResult(Board board, Policy policy, List<BoardAtAmbient> sw
     }
 
     /** Where the enclosure air itself runs away, if it does in the sweep ({@link EnclosureRunaway#of}). */
-    public java.util.Optional<EnclosureRunaway> enclosureRunaway() {
+    public Optional<EnclosureRunaway> enclosureRunaway() {
         return EnclosureRunaway.of(positions);
     }
 

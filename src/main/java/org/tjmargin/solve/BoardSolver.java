@@ -2,6 +2,7 @@ package org.tjmargin.solve;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Collections;
 import java.util.List;
 import org.tjmargin.derating.Policy;
 import org.tjmargin.derating.CornerReadings;
@@ -95,7 +96,7 @@ public final class BoardSolver {
         if (air == PointStatus.RUNAWAY) {
             ThermalOutcome runaway = new ThermalOutcome.Runaway(tLocalK, settings.capK());
             return evaluate(spec, instances, policy, ambientK, tLocalK, settings,
-                    java.util.Collections.nCopies(instances.size(), runaway), kept);
+                    Collections.nCopies(instances.size(), runaway), kept);
         }
         PositionAtAmbient p = evaluate(spec, instances, policy, ambientK, tLocalK, settings, outcomes, kept);
         return air == PointStatus.CONVERGED ? p : p.withStatus(p.status().worse(air));

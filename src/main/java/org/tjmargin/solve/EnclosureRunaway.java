@@ -38,5 +38,4 @@ public record EnclosureRunaway(double ambientK, boolean atOrBelow, List<String> 
         return lowest == null ? Optional.empty()
                 : Optional.of(new EnclosureRunaway(lowest.ambientK(), lowest.atOrBelowSearch(), drivers));
     }
-
 }
