@@ -20,9 +20,14 @@ final class ChartStatisticsData {
     static String run(PositionStatistics s) {
         MonteCarloResult mc = s.monteCarlo();
         return "Seeded Monte Carlo of " + mc.settings().samples() + " samples (seed " + mc.settings().seed() + ") at "
-                + ChartData.temperature(s.ambientK()) + " ambient, air at the part "
-                + ChartData.temperature(s.tLocalK()) + (s.surgesIncluded() ? ", every surge run on every sample"
-                : "") + ".";
+                + ChartData.temperature(s.ambientK()) + " ambient, " + airAtPart(s, ChartData::temperature)
+                + (s.surgesIncluded() ? ", every surge run on every sample" : "") + ".";
+    }
+
+    /** {@code air at the part 60.9 °C}, or that the enclosure air has no steady state there. */
+    static String airAtPart(PositionStatistics s, java.util.function.DoubleFunction<String> temperature) {
+        return Double.isNaN(s.tLocalK()) ? "the enclosure air has no steady state there (every sample runs away)"
+                : "air at the part " + temperature.apply(s.tLocalK());
     }
 
     /** The air assumption of every statistical run ({@link StatisticsText#AIR}) as a sentence. */

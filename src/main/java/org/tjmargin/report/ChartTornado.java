@@ -106,8 +106,8 @@ final class ChartTornado {
 
         List<String> subtitles = new ArrayList<>();
         subtitles.add(ChartStatisticsData.sentence(StatisticsText.TORNADO) + " At "
-                + ChartData.temperature(s.ambientK()) + " ambient, air at the part "
-                + ChartData.temperature(s.tLocalK()) + (s.surgesIncluded() ? ", surge rules included" : "") + ".");
+                + ChartData.temperature(s.ambientK()) + " ambient, " + ChartStatisticsData.airAtPart(s,
+                ChartData::temperature) + (s.surgesIncluded() ? ", surge rules included" : "") + ".");
         subtitles.add("Nominal limiting margin " + HtmlFormat.margin(t.nominal().margin()) + " (rule "
                 + t.nominal().limitingRuleId() + ")" + (t.nominal().status() == PointStatus.CONVERGED ? ""
                 : ", nominal point " + status(t.nominal())) + ".");

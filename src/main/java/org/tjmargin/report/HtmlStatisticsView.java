@@ -103,8 +103,8 @@ final class HtmlStatisticsView {
         PositionAtAmbient atMax = result.atMaximumAmbient().positions().get(index);
         MonteCarloResult mc = s.monteCarlo();
         String at = HtmlFormat.temperature(s.ambientK());
-        String caption = "Position " + s.positionId() + " at the design's highest ambient, " + at + " (air at the part "
-                + HtmlFormat.temperature(s.tLocalK()) + "): the worst-case corners beside the statistical spread of "
+        String caption = "Position " + s.positionId() + " at the design's highest ambient, " + at + " ("
+                + ChartStatisticsData.airAtPart(s, HtmlFormat::temperature) + "): the worst-case corners beside the statistical spread of "
                 + "the same inputs" + (s.surgesIncluded() ? ", surges included" : "") + ".";
         String surges = null;
         if (s.surgesIncluded()) {

@@ -53,7 +53,7 @@ public final class StatisticsCsv {
         return print(SPREAD_HEADER, csv -> {
             for (PositionStatistics p : s.positions()) {
                 String amb = num(Labels.celsius(p.ambientK()));
-                String air = num(Labels.celsius(p.tLocalK()));
+                String air = celsiusOrBlank(p.tLocalK());
                 csv.printRecord(p.positionId(), "corners", amb, air, p.corners().corners(),
                         celsiusOrBlank(p.corners().tjMinK()), "", celsiusOrBlank(p.corners().tjMaxK()), "",
                         p.corners().margin(), "", p.corners().limitingRuleId(), "", "", "", p.surgesIncluded());
@@ -91,7 +91,7 @@ public final class StatisticsCsv {
             throws IOException {
         for (YieldPoint y : points) {
             var worst = y.mostViolated();
-            csv.printRecord(id, Labels.celsius(y.ambientK()), Labels.celsius(y.tLocalK()), y.yield(), y.wilsonLo(),
+            csv.printRecord(id, Labels.celsius(y.ambientK()), celsiusOrBlank(y.tLocalK()), y.yield(), y.wilsonLo(),
                     y.wilsonHi(), y.samples(), rules, worst.map(RuleViolation::ruleId).orElse(""),
                     worst.map(w -> (Object) w.probability().estimate()).orElse(""));
         }

@@ -50,7 +50,7 @@ final class StatisticsJson {
     static ObjectNode position(JsonNodeFactory mapper, PositionSpec spec, PositionStatistics s) {
         ObjectNode o = mapper.objectNode();
         o.put("ambientC", Labels.celsius(s.ambientK()));
-        o.put("tLocalC", Labels.celsius(s.tLocalK()));
+        putCelsiusOrNull(o, "tLocalC", s.tLocalK());
         ObjectNode c = o.putObject("corners");
         c.put("method", StatisticsText.CORNERS);
         putCelsiusOrNull(c, "tjMinC", s.corners().tjMinK());
@@ -89,9 +89,9 @@ final class StatisticsJson {
         y.put("rules", rules);
         ArrayNode pts = y.putArray("points");
         for (YieldPoint p : points) {
-            ObjectNode pt = pts.addObject().put("ambientC", Labels.celsius(p.ambientK()))
-                    .put("tLocalC", Labels.celsius(p.tLocalK())).put("yield", p.yield()).put("lower", p.wilsonLo())
-                    .put("upper", p.wilsonHi()).put("samples", p.samples());
+            ObjectNode pt = pts.addObject().put("ambientC", Labels.celsius(p.ambientK()));
+            putCelsiusOrNull(pt, "tLocalC", p.tLocalK());
+            pt.put("yield", p.yield()).put("lower", p.wilsonLo()).put("upper", p.wilsonHi()).put("samples", p.samples());
             ArrayNode pr = pt.putArray("rules");
             for (RuleViolation v : p.rules()) {
                 pr.addObject().put("id", v.ruleId()).setAll(interval(mapper, v.probability()));

@@ -108,6 +108,20 @@ class EnclosureRunawayReportTest {
             assertTrue(p.yield().get(0).yield() > 0.5, p.positionId() + ": in the cool end, in balanced air, parts pass");
         }
         assertTrue(SummaryTable.render(R, Optional.of(s), Cautions.forResult(R)).contains("100 % ["));
+        // No output names an air temperature where the air has none.
+        for (PositionStatistics p : s.positions()) {
+            assertTrue(Double.isNaN(p.tLocalK()), p.positionId());
+            assertTrue(Double.isNaN(p.yield().get(p.yield().size() - 1).tLocalK()), p.positionId());
+            assertFalse(Double.isNaN(p.yield().get(0).tLocalK()), p.positionId());
+        }
+        String top = SweepCsv.num(Labels.celsius(R.atMaximumAmbient().ambientK()));
+        for (String line : StatisticsCsv.yield(s).split("\r\n")) {
+            String[] f = line.split(",", -1);
+            if (f[1].equals(top)) {
+                assertEquals("", f[2], line);
+            }
+        }
+        assertTrue(ChartStatisticsData.run(s.positions().get(0)).contains("the enclosure air has no steady state"));
     }
 
     @Test

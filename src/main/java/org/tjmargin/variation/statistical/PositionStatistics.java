@@ -8,7 +8,8 @@ import java.util.List;
  *
  * @param positionId     the position
  * @param ambientK       the design's highest ambient, where the runs below are taken (K)
- * @param tLocalK        the position's air there, from the worst-case board balance (K)
+ * @param tLocalK        the position's air there, from the worst-case board balance (K); NaN where the air has no
+ *                       balance (every sample then runs away)
  * @param corners        worst-case corners at that ambient
  * @param rss            first-order spread about the nominal
  * @param monteCarlo     Monte Carlo at that ambient, surges included where {@code surgesIncluded}

@@ -108,6 +108,8 @@ public final class StatisticalAnalysis {
         boolean surges = spec.surges().isPresent();
         PointEvaluator ev = new PointEvaluator(spec, policy, at.tLocalK(), solver, surges,
                 hottest.airStatus() == PointStatus.RUNAWAY);
+        // The air the results name: none where it has no balance (the evaluator is told it runs away).
+        double air = hottest.airBalanced() ? at.tLocalK() : Double.NaN;
         MonteCarloSettings top = surges
                 ? new MonteCarloSettings(plan.surgeSamples(), plan.settings().seed(), plan.settings().blockSize(),
                         plan.settings().histogramBins())
@@ -119,7 +121,7 @@ public final class StatisticalAnalysis {
         int last = result.sweep().size() - 1;
         List<YieldPoint> yield = IntStream.of(ambients).parallel().mapToObj(k -> {
             if (k == last && !surges) {
-                return YieldPoint.of(hottest.ambientK(), at.tLocalK(), mc);
+                return YieldPoint.of(hottest.ambientK(), air, mc);
             }
             YieldPoint p = YieldCurve.at(result.sweep().get(k), i, spec, policy, model, plan.settings(), solver,
                     false);
@@ -128,13 +130,13 @@ public final class StatisticalAnalysis {
         }).toList();
         List<YieldPoint> withSurges = !surges ? List.of() : IntStream.of(ambients).parallel().mapToObj(k -> {
             if (k == last) {
-                return YieldPoint.of(hottest.ambientK(), at.tLocalK(), mc);
+                return YieldPoint.of(hottest.ambientK(), air, mc);
             }
             YieldPoint p = YieldCurve.at(result.sweep().get(k), i, spec, policy, model, top, solver, true);
             work.done(top.samples());
             return p;
         }).toList();
-        return new PositionStatistics(spec.id(), hottest.ambientK(), at.tLocalK(), extremes(at), rss, mc, surges,
+        return new PositionStatistics(spec.id(), hottest.ambientK(), air, extremes(at), rss, mc, surges,
                 tornado, yield, withSurges);
     }
 

@@ -46,6 +46,6 @@ public final class YieldCurve {
         }
         MonteCarloResult r = MonteCarlo.run(new PointEvaluator(spec, policy, p.tLocalK(), solver, withSurges,
                 b.airStatus() == PointStatus.RUNAWAY), model, settings);
-        return YieldPoint.of(b.ambientK(), p.tLocalK(), r);
+        return YieldPoint.of(b.ambientK(), b.airBalanced() ? p.tLocalK() : Double.NaN, r);
     }
 }

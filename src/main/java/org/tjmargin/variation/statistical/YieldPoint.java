@@ -4,7 +4,7 @@ package org.tjmargin.variation.statistical;
  * The Monte Carlo yield of one position at one ambient.
  *
  * @param ambientK room temperature (K)
- * @param tLocalK  the position's air there, from the board balance (K)
+ * @param tLocalK  the position's air there, from the board balance (K); NaN where the air has no balance
  * @param yield    fraction of samples that pass every rule (1)
  * @param wilsonLo lower end of its 95 % Wilson score interval
  * @param wilsonHi upper end
