@@ -104,7 +104,8 @@ final class HtmlStatisticsView {
         MonteCarloResult mc = s.monteCarlo();
         String at = HtmlFormat.temperature(s.ambientK());
         String caption = "Position " + s.positionId() + " at the design's highest ambient, " + at + " ("
-                + ChartStatisticsData.airAtPart(s, HtmlFormat::temperature) + "): the worst-case corners beside the statistical spread of "
+                + ChartStatisticsData.airAtPart(s, HtmlFormat::temperature) + "): the worst-case corners beside the"
+                + " statistical spread of "
                 + "the same inputs" + (s.surgesIncluded() ? ", surges included" : "") + ".";
         String surges = null;
         if (s.surgesIncluded()) {

@@ -91,7 +91,8 @@ final class StatisticsJson {
         for (YieldPoint p : points) {
             ObjectNode pt = pts.addObject().put("ambientC", Labels.celsius(p.ambientK()));
             putCelsiusOrNull(pt, "tLocalC", p.tLocalK());
-            pt.put("yield", p.yield()).put("lower", p.wilsonLo()).put("upper", p.wilsonHi()).put("samples", p.samples());
+            pt.put("yield", p.yield()).put("lower", p.wilsonLo()).put("upper", p.wilsonHi())
+                    .put("samples", p.samples());
             ArrayNode pr = pt.putArray("rules");
             for (RuleViolation v : p.rules()) {
                 pr.addObject().put("id", v.ruleId()).setAll(interval(mapper, v.probability()));

@@ -144,7 +144,10 @@ public final class BoardSolver {
         return new Air(rise, air.evaluations(), status, last.tLocalK == ambientK + rise ? last.outcomes : null);
     }
 
-    /** Every corner of position {@code i} in air at {@code tLocalK}: the balance's own outcomes where it solved them there. */
+    /**
+     * Every corner of position {@code i} in air at {@code tLocalK}: the balance's own outcomes where it solved them
+     * there.
+     */
     private static List<ThermalOutcome> solvedIn(PreparedBoard board, int i, double tLocalK, SolverSettings settings,
                                                  Air air) {
         List<ThermalOutcome> solved = air.outcomesOf(i);

@@ -108,7 +108,10 @@ public record RunawayOnset(double ambientK, boolean atOrBelowSearch, Cause cause
         return enc.riseK(above) - enc.riseK(below) > DRIVER_AIR_SPAN_K;
     }
 
-    /** The heat position {@code index} puts into air at {@code tLocalK}: its corner of greatest heat, as the board's air balance counts it. */
+    /**
+     * The heat position {@code index} puts into air at {@code tLocalK}: its corner of greatest heat, as the board's
+     * air balance counts it.
+     */
     private static double heatW(PreparedBoard board, int index, double tLocalK, SolverSettings settings) {
         double max = 0;
         HeatBalance balance = new HeatBalance();

@@ -101,11 +101,13 @@ class EnclosureRunawayReportTest {
         StatisticsPlan plan = new StatisticsPlan(new MonteCarloSettings(500, 7, 100, 20), 4, 10, Map.of());
         StatisticsResult s = StatisticalAnalysis.run(R, plan, SolverSettings.DEFAULT, StatisticsProgress.NONE);
         for (PositionStatistics p : s.positions()) {
-            assertEquals(500, p.monteCarlo().runawaySamples(), p.positionId() + ": every sample runs away with the air");
+            assertEquals(500, p.monteCarlo().runawaySamples(),
+                    p.positionId() + ": every sample runs away with the air");
             assertEquals(1.0, p.monteCarlo().violation().estimate(), p.positionId());
             YieldPoint top = p.yield().get(p.yield().size() - 1);
             assertEquals(0.0, top.yield(), p.positionId());
-            assertTrue(p.yield().get(0).yield() > 0.5, p.positionId() + ": in the cool end, in balanced air, parts pass");
+            assertTrue(p.yield().get(0).yield() > 0.5,
+                    p.positionId() + ": in the cool end, in balanced air, parts pass");
         }
         assertTrue(SummaryTable.render(R, Optional.of(s), Cautions.forResult(R)).contains("100 % ["));
         // No output names an air temperature where the air has none.

@@ -66,7 +66,8 @@ public record PointEvaluator(PositionSpec spec, Policy policy, double tLocalK, S
         PositionInstance inst = spec.atValues(values);
         Optional<OperatingPoint> fast = airRunsAway ? Optional.empty() : LinearFastPath.solve(inst, tLocalK, settings);
         ThermalOutcome out = airRunsAway ? new ThermalOutcome.Runaway(tLocalK, settings.capK())
-                : fast.<ThermalOutcome>map(ThermalOutcome.Converged::new).orElseGet(() -> inst.solve(tLocalK, settings));
+                : fast.<ThermalOutcome>map(ThermalOutcome.Converged::new)
+                        .orElseGet(() -> inst.solve(tLocalK, settings));
         boolean surgeStopped = false;
         RuleContext ctx;
         if (runsSurges() && out instanceof ThermalOutcome.Converged c) {
