@@ -10,7 +10,7 @@ import java.util.List;
  *                        ({@code airStatus} not converged), the rise at which its search stopped, which is not a
  *                        temperature the air settles at: writers show none
  * @param boardHeatW      heat of all positions used for the rise (each at its corner of greatest heat) (W), in the
- *                        air of {@code enclosureRiseK}
+ *                        air of {@code enclosureRiseK}; NaN where the air runs away (it has no steady heat)
  * @param positions       each position, in board order; where the air runs away, every position runs away with it
  *                        (every corner a {@link ThermalOutcome.Runaway})
  * @param couplingEvaluations evaluations of the board-level air balance

@@ -54,7 +54,8 @@ public final class BoardSolver {
             positions.add(p);
             status = status.worse(p.status());
         }
-        return new BoardAtAmbient(ambientK, air.riseK(), heat, positions, air.evaluations(), air.status(), status);
+        return new BoardAtAmbient(ambientK, air.riseK(), air.status() == PointStatus.RUNAWAY ? Double.NaN : heat,
+                positions, air.evaluations(), air.status(), status);
     }
 
     /**

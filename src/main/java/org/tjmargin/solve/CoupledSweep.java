@@ -186,7 +186,8 @@ final class CoupledSweep {
                 }
             }
             double tLocal = ta + rise;
-            if (pass.tLocalK() != tLocal) {
+            // In air that runs away no corner's solve is read (BoardSolver.inAir), so none is made there.
+            if (pass.tLocalK() != tLocal && air != PointStatus.RUNAWAY) {
                 pass = fullPass(board, tLocal, settings, policy, ta, kept);
                 evaluations++;
             }
@@ -205,7 +206,8 @@ final class CoupledSweep {
             for (PositionAtAmbient p : positions) {
                 status = status.worse(p.status());
             }
-            sweep.add(new BoardAtAmbient(ta, rise, pass.boardHeatW(), positions, evaluations, air, status));
+            sweep.add(new BoardAtAmbient(ta, rise, air == PointStatus.RUNAWAY ? Double.NaN : pass.boardHeatW(),
+                    positions, evaluations, air, status));
             progress.ambientsSwept(a + 1, ambients.length);
             airStatus.add(air);
             if (air == PointStatus.CONVERGED) {
