@@ -211,7 +211,9 @@ public final class SummaryTable {
             hot == null ? "-" : Quantities.format(hot.circuit().voltageV(), Dimension.VOLTAGE),
             Double.isInfinite(minIz) ? "-" : Quantities.format(minIz, Dimension.CURRENT),
             Labels.maxAmbient(pr.maxAmbient()), pr.limitingRuleId(),
-            Labels.marginPercent(pr.worstMargin(), f -> String.format(Locale.ROOT, "%.1f %%", 100 * f))};
+            // A runaway position's margin comes from the search cap, and says so (as in the report).
+            Labels.marginPercent(pr.worstMargin(), f -> String.format(Locale.ROOT, "%.1f %%", 100 * f))
+                    + (pr.verdict() == Verdict.RUNAWAY ? " (runaway)" : "")};
     }
 
     private static String pad(String s, int w) {
