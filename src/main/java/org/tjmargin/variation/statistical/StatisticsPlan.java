@@ -13,8 +13,9 @@ import org.tjmargin.variation.VariationModel;
  * @param settings      samples per Monte Carlo run, seed, block size, histogram bins
  * @param yieldPoints   ambients of the yield-against-ambient curve, taken evenly from the sweep (its first and last
  *                      always among them), ≥ 2
- * @param surgeSamples  samples of the run at the design's highest ambient for a position with surges, where every
- *                      sample runs each surge transient (≈ 1 ms each); ≥ 1, at most {@code settings.samples()}
+ * @param surgeSamples  samples of each run of a position with surges in which every sample runs each surge
+ *                      transient (≈ 0.5 ms each): the run at the design's highest ambient and each point of the
+ *                      position's yield curve with surges; ≥ 1, at most {@code settings.samples()}
  * @param models        each position's distributions by position id; a position not named has every axis uniform
  * @param positions     the positions the statistics run for, by id; empty for every position. On a board of a
  *                      thousand positions the whole budget is positions × yield points × samples (1.6e8 solves at
@@ -35,7 +36,10 @@ public record StatisticsPlan(MonteCarloSettings settings, int yieldPoints, long 
     /** Default ambients of the yield curve: 16. */
     public static final int DEFAULT_YIELD_POINTS = 16;
 
-    /** Default samples with surges: 200 (upper 95 % bound 1.9 % when none fails; ≈ 0.2 s per surge on one core). */
+    /**
+     * Default samples with surges: 200 (upper 95 % bound 1.9 % when none fails; about 0.1 s per run of two surges on
+     * one core).
+     */
     public static final long DEFAULT_SURGE_SAMPLES = 200;
 
     /** Default seed. */
