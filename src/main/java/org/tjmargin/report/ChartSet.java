@@ -154,7 +154,7 @@ public final class ChartSet {
             case MARGIN_HISTOGRAM -> ChartHistogram.buildMargin(result, positionIndex, required(result, stats,
                     positionIndex, kind));
             case TORNADO -> ChartTornado.build(result, positionIndex, required(result, stats, positionIndex, kind));
-            case YIELD -> ChartYield.build(result, positionIndex, required(result, stats, positionIndex, kind));
+            case YIELD -> ChartYield.build(result, required(result, stats, positionIndex, kind));
         };
     }
 

@@ -28,7 +28,7 @@ final class ChartYield {
     private ChartYield() {
     }
 
-    static JFreeChart build(AnalysisResult result, int index, PositionStatistics s) {
+    static JFreeChart build(AnalysisResult result, PositionStatistics s) {
         boolean surges = !s.yieldWithSurges().isEmpty();
         YIntervalSeries yield = new YIntervalSeries("yield, " + StatisticsText.YIELD_RULES
                 + (surges ? " (" + s.yield().get(0).samples() + " samples)" : "") + ", with its 95 % Wilson band",

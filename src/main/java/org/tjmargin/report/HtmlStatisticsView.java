@@ -113,8 +113,7 @@ final class HtmlStatisticsView {
                     + "spread and the ranking run every surge of this position on every point. The yield chart has"
                     + " two curves: the " + StatisticsText.YIELD_RULES + " (" + s.yield().get(0).samples()
                     + " samples at each ambient) and " + StatisticsText.YIELD_WITH_SURGES + " ("
-                    + (s.yieldWithSurges().isEmpty() ? mc.settings().samples() : s.yieldWithSurges().get(0)
-                    .samples()) + ", the same parts as the first of the others).";
+                    + mc.settings().samples() + ", the same parts as the first of the others).";
         }
         return new HtmlView.Statistics(anchor(positionAnchor), caption, methods(s), run(s), violations(result, atMax,
                 mc), "Each rule of the policy that applies to this position, with the fraction of the "

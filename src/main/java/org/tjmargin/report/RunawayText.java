@@ -24,12 +24,14 @@ final class RunawayText {
 
     /** As above, temperatures written by {@code temperature} (from kelvin). */
     static String onset(RunawayOnset o, DoubleFunction<String> temperature) {
-        String at = (o.atOrBelowSearch() ? "at or below " : "at ") + temperature.apply(o.ambientK()) + " ambient";
+        String ambient = temperature.apply(o.ambientK()) + " ambient";
+        String at = (o.atOrBelowSearch() ? "at or below " : "at ") + ambient;
         return switch (o.cause()) {
             case OWN -> "thermal runaway begins " + at;
             case DRIVES_ENCLOSURE -> "thermal runaway begins " + at + ": its heat leaps there by more than the box"
                     + " can shed, and the enclosure air runs away with it";
-            case ENCLOSURE -> "runs away with the enclosure air from " + at.substring(3);
+            case ENCLOSURE -> "runs away with the enclosure air from " + (o.atOrBelowSearch() ? "or below " : "")
+                    + ambient;
         };
     }
 
